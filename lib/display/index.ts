@@ -1,0 +1,2 @@
+export { MIME } from "./mime.js";
+export type { MimeBundle } from "./mime.js";
