@@ -1,0 +1,15 @@
+/**
+ * THE list of built-ins: one line per group file. Completion, inspect, suggestions and the
+ * executed-examples test read this list; nothing else registers built-ins.
+ */
+import type { BuiltinDef } from "./define.js";
+import { ranges } from "./ranges.js";
+import { cell } from "./cell.js";
+
+export const BUILTINS: readonly BuiltinDef[] = [
+  ...ranges,
+  ...cell,
+];
+
+export { defineBuiltin, signatureOf, type BuiltinDef, type BuiltinContext, type BuiltinArgs, type ParamSpec, type ParamType } from "./define.js";
+export { ArgumentError } from "./bind.js";

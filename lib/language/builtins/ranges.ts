@@ -1,0 +1,83 @@
+/**
+ * span and logspan: evenly and logarithmically spaced values with units, returned as one compact
+ * column (SI numbers + the unit of the first end point) that vectorised built-ins read directly.
+ */
+import type { Unit } from "mathjs";
+import { ArgumentError } from "./bind.js";
+import { defineBuiltin, type BuiltinContext, type BuiltinDef } from "./define.js";
+
+const MAX_POINTS = 10_000_000;
+
+interface Ends { a: number; b: number; siUnit: string; displayUnit: string }
+
+/** Both ends to SI numbers of one dimension; offsets (degC, barg) are resolved to absolute values. */
+function ends(fn: string, a: unknown, b: unknown, ctx: BuiltinContext): Ends {
+  const isUnit = (x: unknown): x is Unit => typeof x === "object" && x !== null && (x as { isUnit?: boolean }).isUnit === true;
+  if (typeof a === "number" && typeof b === "number") return { a, b, siUnit: "", displayUnit: "" };
+  if (isUnit(a) && isUnit(b)) {
+    if (!a.equalBase(b)) {
+      throw new ArgumentError(`${fn}(): a and b must have the same dimension, got ${ctx.textOf(a)} and ${ctx.textOf(b)}`);
+    }
+    const siA = a.toSI();
+    const siUnit = siA.formatUnits();
+    return { a: siA.toNumber(siUnit), b: b.toSI().toNumber(siUnit), siUnit, displayUnit: a.formatUnits() || siUnit };
+  }
+  throw new ArgumentError(`${fn}(): a and b must both be quantities (like 300 K) or both plain numbers, got ${ctx.textOf(a)} and ${ctx.textOf(b)}`);
+}
+
+function count(fn: string, n: number): number {
+  if (!Number.isInteger(n) || n < 2 || n > MAX_POINTS) {
+    throw new ArgumentError(`argument n of ${fn}() must be a whole number from 2 to ${MAX_POINTS}, got ${n}`);
+  }
+  return n;
+}
+
+export const ranges: BuiltinDef[] = [
+  defineBuiltin({
+    name: "span",
+    group: "ranges",
+    params: [
+      { name: "a", type: "quantity", doc: "first value (a quantity or a plain number)" },
+      { name: "b", type: "quantity", doc: "last value, same dimension as a" },
+      { name: "n", type: "number", doc: "number of points, 2 or more" },
+    ],
+    returns: "column",
+    doc: "n evenly spaced values from a to b inclusive, in the unit of a. Feed it to any built-in that takes a quantity to get a whole curve in one call.",
+    method: "a + i (b - a)/(n - 1) for i = 0..n-1 on absolute SI values, so 20 degC..80 degC steps in kelvin; the last point is exactly b.",
+    examples: ["span(300 K, 400 K, 5)", "span(20 degC, 80 degC, 4)", "span(0, 1, 11)"],
+    impl: ({ a, b, n }, ctx) => {
+      const e = ends("span", a, b, ctx);
+      const k = count("span", n);
+      const out = new Float64Array(k);
+      const step = (e.b - e.a) / (k - 1);
+      for (let i = 0; i < k; i++) out[i] = e.a + i * step;
+      out[k - 1] = e.b;
+      return ctx.column(out, e.siUnit, e.displayUnit);
+    },
+  }),
+  defineBuiltin({
+    name: "logspan",
+    group: "ranges",
+    params: [
+      { name: "a", type: "quantity", doc: "first value, > 0 (absolute)" },
+      { name: "b", type: "quantity", doc: "last value, > 0, same dimension as a" },
+      { name: "n", type: "number", doc: "number of points, 2 or more" },
+    ],
+    returns: "column",
+    doc: "n logarithmically spaced values from a to b inclusive (constant ratio between neighbours), in the unit of a. Suits pressure sweeps over decades.",
+    method: "a (b/a)^(i/(n-1)) for i = 0..n-1 on absolute SI values; the last point is exactly b.",
+    examples: ["logspan(1 bar, 100 bar, 3)", "logspan(1e-3, 1, 4)"],
+    impl: ({ a, b, n }, ctx) => {
+      const e = ends("logspan", a, b, ctx);
+      const k = count("logspan", n);
+      if (!(e.a > 0 && e.b > 0)) {
+        throw new ArgumentError(`logspan(): a and b must be positive (absolute), got ${ctx.textOf(a)} and ${ctx.textOf(b)}`);
+      }
+      const out = new Float64Array(k);
+      const ratio = Math.log(e.b / e.a) / (k - 1);
+      for (let i = 0; i < k; i++) out[i] = e.a * Math.exp(i * ratio);
+      out[k - 1] = e.b;
+      return ctx.column(out, e.siUnit, e.displayUnit);
+    },
+  }),
+];
