@@ -35,7 +35,7 @@ const RULES: Record<Unit, { units: Unit[]; packages: string[]; node: boolean }> 
   // The engine hosts the language and finishes display bundles (async chart rendering) before sending.
   "kernel/engine": { units: ["kernel/protocol", "lib/language", "lib/display"], packages: [], node: true },
   // The runner reads design-check rows by the MIME type defined once in lib/display.
-  "kernel/runner": { units: ["kernel/wire", "kernel/protocol", "kernel/engine", "lib/display"], packages: [], node: true },
+  "kernel/runner": { units: ["kernel/wire", "kernel/protocol", "kernel/engine", "lib/display"], packages: ["marked"], node: true },
   "kernel/main.ts": { units: KERNEL_ALL, packages: [], node: true },
   "kernel/cli.ts": { units: KERNEL_ALL, packages: [], node: true },
 };
