@@ -15,3 +15,10 @@ export const MIME = {
 
 /** A Jupyter MIME bundle: text/plain is always present. Binary types (PNG) are base64 strings. */
 export type MimeBundle = { [MIME.text]: string } & Record<string, unknown>;
+
+/**
+ * The Vega-Lite schema every chart declares, pinned here once. It matches the MIME type above (v5):
+ * front ends pick their renderer by MIME type and check the schema's major version. The specs use
+ * only features common to Vega-Lite 5 and the 6.x compiler installed here.
+ */
+export const VEGA_LITE_SCHEMA = "https://vega.github.io/schema/vega-lite/v5.json";
