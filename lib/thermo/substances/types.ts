@@ -35,4 +35,6 @@ export interface Substance {
   source: string;
   /** True for a user-defined pseudo-component. */
   user?: boolean;
+  /** Caveats for the user, e.g. "Tb is the sublimation point" or how defaults were filled. */
+  note?: string;
 }
