@@ -1,0 +1,157 @@
+/**
+ * A Session: one restricted mathjs instance, one scope that outlives cells, errors and interrupts,
+ * the built-in registry bound to the current cell's sink, and the editor services (complete,
+ * inspect, isComplete) derived from the same registry.
+ */
+import type { MathJsInstance, MathNode } from "mathjs";
+import { MIME, type MimeBundle } from "../display/index.js";
+import { BUILTINS } from "./builtins/index.js";
+import { bindBuiltin } from "./builtins/bind.js";
+import type { BuiltinContext, BuiltinDef } from "./builtins/define.js";
+import { createRestrictedMath, DISABLED_NAMES } from "./mathInstance.js";
+import { createUnitsBridge, SI_UNITS } from "./unitsBridge.js";
+import { createColumnFactory } from "./values/column.js";
+import { createFormatter } from "./format.js";
+import { scanCell, positionOf } from "./statements.js";
+import { LanguageError, translateError } from "./errors.js";
+import { completeAt } from "./complete.js";
+import { inspectAt } from "./inspect.js";
+import { isCompleteCell } from "./isComplete.js";
+import type { CellSink, RunResult, Session, SessionOptions } from "./session.js";
+
+/** Deeper bracket nesting is refused before parsing (mathjs parses recursively). */
+export const MAX_NESTING = 200;
+
+export class Interrupted extends Error {
+  override name = "Interrupted";
+  constructor() {
+    super("interrupted by the user; variables defined so far are kept");
+  }
+}
+
+const SILENT_SINK: CellSink = { stdout() {}, display() {}, clear() {} };
+
+export interface SessionInternals {
+  math: MathJsInstance;
+  scope: Map<string, unknown>;
+  registry: ReadonlyMap<string, BuiltinDef>;
+  /** Every name an expression can call or use: scope, built-ins, mathjs functions and constants, units. */
+  knownNames(): string[];
+  unitNames(): string[];
+  formatText(value: unknown): string;
+}
+
+export function createSessionWithInternals(options: SessionOptions): { session: Session; internals: SessionInternals } {
+  const registry = new Map(BUILTINS.map((d) => [d.name, d]));
+  if (registry.size !== BUILTINS.length) throw new Error("two built-ins share a name");
+  let sink: CellSink = SILENT_SINK;
+  let ctx: BuiltinContext | undefined;
+  const getCtx = () => ctx!;
+  const { math, parse } = createRestrictedMath({
+    functions: (m) => Object.fromEntries(BUILTINS.map((def) => [def.name, bindBuiltin(def, m, getCtx)])),
+  });
+
+  const units = createUnitsBridge(math);
+  const column = createColumnFactory(math);
+  const formatter = createFormatter(math, units);
+  const scope = new Map<string, unknown>();
+
+  ctx = {
+    shouldStop: options.shouldStop,
+    interrupted: () => new Interrupted(),
+    stdout: (t) => sink.stdout(t),
+    display: (b) => sink.display(b),
+    bundleOf: (v) => formatter.bundle(v),
+    textOf: (v) => formatter.text(v),
+    warn: (t) => sink.stdout(`warning: ${t}\n`),
+    units,
+    column: (si, dimOrUnit, displayUnit) => {
+      const siUnit = SI_UNITS[dimOrUnit] ?? dimOrUnit;
+      return column(si, siUnit, displayUnit ?? siUnit);
+    },
+    call: (fn, ...args) => {
+      if (typeof fn !== "function") throw new Error(`expected a function, got ${formatter.text(fn)}`);
+      return (fn as (...a: unknown[]) => unknown)(...args);
+    },
+  };
+
+  const unitNames = (() => {
+    let cache: string[] | undefined;
+    return () => (cache ??= Object.keys((math as unknown as { Unit: { UNITS: object } }).Unit.UNITS));
+  })();
+  const disabled = new Set<string>(DISABLED_NAMES);
+  const mathNames = (() => {
+    let cache: string[] | undefined;
+    return () => (cache ??= Object.keys(math).filter((k) => /^[a-z][A-Za-z0-9]*$/.test(k) && !disabled.has(k) && !registry.has(k)));
+  })();
+  const knownNames = () => [...scope.keys(), ...registry.keys(), ...mathNames(), ...unitNames()];
+
+  interface Compiled { evaluate(scope: Map<string, unknown>): unknown; assigned?: string }
+  // Parsed statements by source text: re-running a cell skips the parser.
+  const compiled = new Map<string, Compiled>();
+  const compile = (text: string): Compiled => {
+    const node = parse(text) as MathNode & { object?: MathNode & { name?: string } };
+    const code = node.compile() as Compiled;
+    const assigned = node.type === "AssignmentNode" && node.object?.type === "SymbolNode" ? node.object.name : undefined;
+    return { evaluate: (s) => code.evaluate(s), assigned };
+  };
+
+  const run = (code: string, cellSink: CellSink): RunResult => {
+    sink = cellSink;
+    let pending: MimeBundle | undefined;
+    const flush = () => {
+      if (pending) sink.display(pending);
+      pending = undefined;
+    };
+    const scan = scanCell(code);
+    try {
+      if (scan.maxDepth > MAX_NESTING) {
+        const at = scan.open[0]?.at ?? 0;
+        const pos = positionOf(code, at);
+        throw new LanguageError(`brackets nested more than ${MAX_NESTING} deep; split the expression into named parts`, pos.line, pos.column, pos.lineText, 1, "SyntaxError");
+      }
+      for (const st of scan.statements) {
+        if (options.shouldStop()) {
+          const pos = positionOf(code, st.start + (st.text.length - st.text.trimStart().length));
+          throw new LanguageError(new Interrupted().message, pos.line, pos.column, pos.lineText, 1, "Interrupted");
+        }
+        let value: unknown;
+        let entry = compiled.get(st.text);
+        try {
+          if (!entry) {
+            entry = compile(st.text);
+            if (compiled.size > 2000) compiled.clear();
+            compiled.set(st.text, entry);
+          }
+          value = entry.evaluate(scope);
+        } catch (err) {
+          throw translateError(err, code, st.start, st.text, knownNames);
+        }
+        if (st.hidden || value === undefined) continue;
+        flush();
+        pending = formatter.bundle(value);
+        // `x = 5 bar` shows as "x = 5 bar": the name tells which line a value came from.
+        if (entry.assigned && !pending[MIME.text].includes("\n")) pending[MIME.text] = `${entry.assigned} = ${pending[MIME.text]}`;
+      }
+      const result = pending;
+      pending = undefined;
+      return result ? { ok: true, result } : { ok: true };
+    } catch (err) {
+      flush();
+      const le = err instanceof LanguageError ? err : translateError(err, code, 0, code, knownNames);
+      return { ok: false, error: le.toCellError() };
+    } finally {
+      sink = SILENT_SINK;
+    }
+  };
+
+  const internals: SessionInternals = { math, scope, registry, knownNames, unitNames, formatText: formatter.text };
+  const session: Session = {
+    run,
+    evaluateExpression: (expression) => run(expression, SILENT_SINK),
+    complete: (code, cursorPos) => completeAt(internals, code, cursorPos),
+    inspect: (code, cursorPos, detail) => inspectAt(internals, code, cursorPos, detail),
+    isComplete: (code) => isCompleteCell(code, parse),
+  };
+  return { session, internals };
+}
