@@ -1,0 +1,60 @@
+/**
+ * In-process engine: the Session runs on the calling thread. For tests and the runner's --in-process
+ * option; a long cell blocks the thread, so interrupt is cooperative only (the flag the language polls).
+ */
+import type { Session, SessionOptions } from "../../lib/language/index.js";
+import type { EngineOutput, Interpreter, RunResult } from "./interpreter.js";
+
+export type SessionFactory = (options: SessionOptions) => Session;
+
+export class InProcessEngine implements Interpreter {
+  private stopRequested = false;
+  private readonly session: Session;
+  private stopped = false;
+
+  /** createSession defaults to the cell language (loaded on demand, so importing this file is cheap). */
+  static async create(createSession?: SessionFactory): Promise<InProcessEngine> {
+    const factory = createSession ?? (await import("../../lib/language/index.js")).createSession;
+    return new InProcessEngine(factory);
+  }
+
+  constructor(createSession: SessionFactory) {
+    this.session = createSession({ shouldStop: () => this.stopRequested });
+  }
+
+  private guard(): void {
+    if (this.stopped) throw new Error("the engine has been shut down");
+  }
+
+  async execute(code: string, onOutput: (output: EngineOutput) => void): Promise<RunResult> {
+    this.guard();
+    this.stopRequested = false;
+    return this.session.run(code, {
+      stdout: (text) => onOutput({ kind: "stdout", text }),
+      display: (bundle, options) => onOutput({ kind: "display", bundle, displayId: options?.displayId, update: options?.update }),
+      clear: (wait) => onOutput({ kind: "clear", wait }),
+    });
+  }
+  async evaluate(expression: string): Promise<RunResult> {
+    this.guard();
+    return this.session.evaluateExpression(expression);
+  }
+  async complete(code: string, cursorPos: number) {
+    this.guard();
+    return this.session.complete(code, cursorPos);
+  }
+  async inspect(code: string, cursorPos: number, detailLevel: 0 | 1) {
+    this.guard();
+    return this.session.inspect(code, cursorPos, detailLevel);
+  }
+  async isComplete(code: string) {
+    this.guard();
+    return this.session.isComplete(code);
+  }
+  interrupt(): void {
+    this.stopRequested = true;
+  }
+  async shutdown(): Promise<void> {
+    this.stopped = true;
+  }
+}

@@ -1,0 +1,83 @@
+/**
+ * execute_request: execute_input, the cell's outputs (stream, display_data, update_display_data,
+ * clear_output), execute_result or error, user_expressions, then the reply. stop_on_error makes
+ * requests that arrived before this reply come back "aborted".
+ */
+import type { EngineOutput, RunResult } from "../engine/index.js";
+import type { Json } from "../protocol/index.js";
+import { boolField, stringField } from "./args.js";
+import type { Handler, HandlerContext } from "./context.js";
+import { answerHelp, helpTarget } from "./helpQuery.js";
+
+export const execute_request: Handler = async (ctx) => {
+  const c = ctx.request.content;
+  const { execution } = ctx.services;
+  const code = stringField(c, "code");
+  const silent = boolField(c, "silent", false);
+  const storeHistory = silent ? false : boolField(c, "store_history", true);
+  const stopOnError = boolField(c, "stop_on_error", true);
+  const expressions = (c.user_expressions ?? {}) as Json;
+
+  if (execution.abort.shouldAbort(ctx.arrival)) {
+    await ctx.reply({ status: "aborted", execution_count: execution.executionCount });
+    return;
+  }
+
+  const count = execution.begin(code, storeHistory);
+  if (!silent) await ctx.publish("execute_input", { code, execution_count: count });
+
+  const payload: Json[] = [];
+  let result: RunResult;
+  const help = helpTarget(code);
+  if (help !== undefined) {
+    const outcome = await answerHelp(ctx.services.engine, help);
+    if (outcome.kind === "page") payload.push({ source: "page", data: outcome.bundle, start: 0 });
+    else await ctx.publish("stream", { name: "stderr", text: `No help for '${outcome.name}': not a known name.\n` });
+    result = { ok: true };
+  } else {
+    // Outputs are published in the order the cell produced them; the reply waits for all of them.
+    const sent: Promise<void>[] = [];
+    result = await ctx.services.engine.execute(code, (o) => sent.push(publishOutput(ctx, o)));
+    await Promise.all(sent);
+  }
+
+  if (!result.ok) {
+    const { ename, evalue, traceback } = result.error;
+    await ctx.publish("error", { ename, evalue, traceback });
+    if (stopOnError) execution.abort.fail();
+    await ctx.reply({ status: "error", execution_count: count, ename, evalue, traceback, user_expressions: {}, payload: [] });
+    return;
+  }
+  if (result.result && !silent) {
+    await ctx.publish("execute_result", { execution_count: count, data: result.result, metadata: {} });
+    if (storeHistory) execution.history.setOutput(count, result.result["text/plain"]);
+  }
+  const userExpressions: Json = {};
+  for (const [key, expr] of Object.entries(expressions)) {
+    userExpressions[key] = expressionResult(typeof expr === "string" ? await ctx.services.engine.evaluate(expr) : badExpression(key));
+  }
+  await ctx.reply({ status: "ok", execution_count: count, user_expressions: userExpressions, payload });
+};
+
+function publishOutput(ctx: HandlerContext, o: EngineOutput): Promise<void> {
+  switch (o.kind) {
+    case "stdout":
+      return ctx.publish("stream", { name: "stdout", text: o.text });
+    case "clear":
+      return ctx.publish("clear_output", { wait: o.wait });
+    case "display": {
+      const transient = o.displayId === undefined ? {} : { display_id: o.displayId };
+      return ctx.publish(o.update && o.displayId !== undefined ? "update_display_data" : "display_data", { data: o.bundle, metadata: {}, transient });
+    }
+  }
+}
+
+function expressionResult(r: RunResult): Json {
+  if (r.ok) return { status: "ok", data: r.result ?? { "text/plain": "" }, metadata: {} };
+  return { status: "error", ename: r.error.ename, evalue: r.error.evalue, traceback: r.error.traceback };
+}
+
+function badExpression(key: string): RunResult {
+  const evalue = `user_expressions.${key}: expected a string expression`;
+  return { ok: false, error: { ename: "RequestError", evalue, traceback: [evalue] } };
+}
