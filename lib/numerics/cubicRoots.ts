@@ -1,0 +1,101 @@
+/**
+ * Real roots of the monic cubic x^3 + a2 x^2 + a1 x + a0 = 0, ascending, multiple roots repeated.
+ *
+ * Method: Q = (a2^2 - 3 a1)/9, R = (2 a2^3 - 9 a2 a1 + 27 a0)/54. If R^2 < Q^3 there are three real
+ * roots, from the trigonometric form x_k = -2 sqrt(Q) cos((theta + 2 pi k)/3) - a2/3 with
+ * cos(theta) = R/sqrt(Q^3); otherwise one real root from Cardano's form A + Q/A - a2/3 with
+ * A = -sign(R) cbrt(|R| + sqrt(R^2 - Q^3)) (Press et al., Numerical Recipes, 3rd ed., section 5.6).
+ * Every root is then polished by Newton steps on the original cubic (kept only while the residual
+ * falls). In the one-real-root case the cubic is deflated by the polished root and the remaining
+ * quadratic's discriminant is examined: a complex pair whose imaginary part is within the rounding
+ * uncertainty of the coefficients is reported as a double real root (that is what a computed double or
+ * triple root looks like after the coefficients are rounded, and what an equation of state needs at a
+ * tangency). The threshold is 4 * min(sqrt(eps M / |p''(c)/2|), cbrt(eps M)), with c the pair's real
+ * part and M = |c|^3 + |a2| c^2 + |a1| |c| + |a0|, the size of the terms when p(c) is evaluated.
+ *
+ * Accuracy: simple roots to a few ulps of the rounded-coefficient problem; double roots to about
+ * sqrt(eps) relative and triple roots to about cbrt(eps) relative, the conditioning limit of any method
+ * working from rounded coefficients. Validity: finite coefficients with |a2|^3, |a1|^1.5 and |a0| well
+ * inside the double range (below about 1e300). Speed: see bench/numerics.ts (several million per s).
+ */
+import { requireNumber } from "./checks.js";
+
+const EPS = Number.EPSILON;
+
+function polish(x: number, a2: number, a1: number, a0: number): number {
+  let best = x;
+  let pBest = ((x + a2) * x + a1) * x + a0;
+  for (let k = 0; k < 4 && pBest !== 0; k++) {
+    const d = (3 * best + 2 * a2) * best + a1;
+    if (d === 0) break;
+    const next = best - pBest / d;
+    const pNext = ((next + a2) * next + a1) * next + a0;
+    if (!(Math.abs(pNext) < Math.abs(pBest))) break;
+    best = next;
+    pBest = pNext;
+  }
+  return best;
+}
+
+/** Roots of x^2 + b1 x + b0 appended to out (double root within rounding kept as two equal roots). */
+function quadraticRoots(b1: number, b0: number, a2: number, a1: number, a0: number, out: number[]): void {
+  const c = -0.5 * b1;
+  const disc = c * c - b0;
+  if (disc >= 0) {
+    const q = c + (c >= 0 ? Math.sqrt(disc) : -Math.sqrt(disc)); // no cancellation
+    out.push(q, q !== 0 ? b0 / q : 0);
+    return;
+  }
+  const im = Math.sqrt(-disc);
+  const ac = Math.abs(c);
+  const size = ac * ac * ac + Math.abs(a2) * c * c + Math.abs(a1) * ac + Math.abs(a0);
+  const curvature = Math.abs(3 * c + a2);
+  const spread = Math.min(curvature > 0 ? Math.sqrt((EPS * size) / curvature) : Infinity, Math.cbrt(EPS * size));
+  if (im <= 4 * spread) {
+    const r = polish(c, a2, a1, a0);
+    out.push(r, r);
+  }
+}
+
+/** All real roots of x^3 + a2 x^2 + a1 x + a0, ascending; length 1, 2 (never) or 3. */
+export function cubicRoots(a2: number, a1: number, a0: number): number[] {
+  requireNumber("cubicRoots", "a2", a2);
+  requireNumber("cubicRoots", "a1", a1);
+  requireNumber("cubicRoots", "a0", a0);
+  const roots: number[] = [];
+  if (a0 === 0) {
+    // x (x^2 + a2 x + a1): exact zero root, quadratic for the rest.
+    roots.push(0);
+    quadraticRoots(a2, a1, a2, a1, a0, roots);
+    return roots.sort((x, y) => x - y);
+  }
+  const shift = a2 / 3;
+  const Q = (a2 * a2 - 3 * a1) / 9;
+  const R = (2 * a2 * a2 * a2 - 9 * a2 * a1 + 27 * a0) / 54;
+  const Q3 = Q * Q * Q;
+  if (R * R < Q3) {
+    const sq = Math.sqrt(Q);
+    const theta = Math.acos(Math.max(-1, Math.min(1, R / (sq * Q))));
+    const m = -2 * sq;
+    roots.push(
+      polish(m * Math.cos(theta / 3) - shift, a2, a1, a0),
+      polish(m * Math.cos((theta + 2 * Math.PI) / 3) - shift, a2, a1, a0),
+      polish(m * Math.cos((theta - 2 * Math.PI) / 3) - shift, a2, a1, a0),
+    );
+    return roots.sort((x, y) => x - y);
+  }
+  const A = -Math.sign(R) * Math.cbrt(Math.abs(R) + Math.sqrt(R * R - Q3));
+  const B = A !== 0 ? Q / A : 0;
+  const r = polish(A + B - shift, a2, a1, a0);
+  roots.push(r);
+  // Deflate: x^3 + a2 x^2 + a1 x + a0 = (x - r)(x^2 + b1 x + b0). Forward deflation is stable for the
+  // largest-magnitude root; otherwise b0 from the constant term is the stable choice.
+  const b1 = a2 + r;
+  const b0 = Math.abs(r * r * r) >= Math.abs(a0) ? a1 + r * b1 : -a0 / r;
+  quadraticRoots(b1, b0, a2, a1, a0, roots);
+  if (roots.length === 3) {
+    roots[1] = polish(roots[1]!, a2, a1, a0);
+    roots[2] = polish(roots[2]!, a2, a1, a0);
+  }
+  return roots.sort((x, y) => x - y);
+}
