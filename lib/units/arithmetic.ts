@@ -1,0 +1,139 @@
+/**
+ * Installs the offset policy (offset.ts) into a mathjs instance by overriding the operators the
+ * expression parser calls (its OperatorNodes look functions up on the instance when compiled). Values
+ * without offset quantities take a fast path straight to the original functions. Must run before the
+ * instance is locked (import disabled).
+ */
+import type { MathJsInstance, Matrix, Unit } from "mathjs";
+import { UnitsError } from "./errors.js";
+import { absoluteOf, checkPower, comparable, isOffsetQuantity, isUnitValue, productOperands, sumOperands } from "./offset.js";
+
+type Binary = (a: unknown, b: unknown) => unknown;
+
+function isMatrix(x: unknown): x is Matrix {
+  return typeof x === "object" && x !== null && (x as { isMatrix?: boolean }).isMatrix === true;
+}
+
+/** True when x is, or (for arrays and matrices) contains, an offset quantity. */
+export function containsOffset(x: unknown): boolean {
+  if (isOffsetQuantity(x)) return true;
+  if (Array.isArray(x)) return x.some(containsOffset);
+  if (isMatrix(x)) return containsOffset(x.valueOf());
+  return false;
+}
+
+/** Apply a scalar rule element by element (scalar broadcast, or equal shapes); keep matrix type. */
+function elementwise(math: MathJsInstance, f: Binary, a: unknown, b: unknown): unknown {
+  const wasMatrix = isMatrix(a) || isMatrix(b);
+  const plain = (x: unknown): unknown => (isMatrix(x) ? x.valueOf() : x);
+  const go = (x: unknown, y: unknown): unknown => {
+    if (Array.isArray(x) && Array.isArray(y)) {
+      if (x.length !== y.length) throw new UnitsError("bad_argument", `arrays of different lengths (${x.length} and ${y.length})`);
+      return x.map((xi, i) => go(xi, y[i]));
+    }
+    if (Array.isArray(x)) return x.map((xi) => go(xi, y));
+    if (Array.isArray(y)) return y.map((yi) => go(x, yi));
+    return f(x, y);
+  };
+  const out = go(plain(a), plain(b));
+  return wasMatrix ? math.matrix(out as never) : out;
+}
+
+const isCollection = (x: unknown): boolean => Array.isArray(x) || isMatrix(x);
+
+/**
+ * Override add, subtract, multiply, divide, dotMultiply, dotDivide, pow, dotPow, sum and the
+ * comparison functions of `math` with offset-aware versions.
+ */
+export function installOffsetPolicy(math: MathJsInstance): void {
+  const m = math as unknown as Record<string, (...args: unknown[]) => unknown>;
+  const orig = Object.fromEntries(
+    ["add", "subtract", "multiply", "divide", "dotMultiply", "dotDivide", "pow", "dotPow", "sum", "mean",
+     "compare", "equal", "unequal", "larger", "largerEq", "smaller", "smallerEq"].map((n) => [n, m[n]!]),
+  );
+
+  const sumLike = (op: "add" | "subtract"): Binary => {
+    const scalar: Binary = (a, b) =>
+      isUnitValue(a) && isUnitValue(b) && a.value !== null && b.value !== null && a.equalBase(b) && (isOffsetQuantity(a) || isOffsetQuantity(b))
+        ? sumOperands(math, op, a, b)
+        : orig[op]!(a, b);
+    return (a, b) => {
+      if (!containsOffset(a) && !containsOffset(b)) return orig[op]!(a, b);
+      return isCollection(a) || isCollection(b) ? elementwise(math, scalar, a, b) : scalar(a, b);
+    };
+  };
+
+  const productLike = (name: string, op: "multiply" | "divide", elementwiseOnly: boolean): Binary => {
+    const scalar: Binary = (a, b) => {
+      const [x, y] = productOperands(math, op, a, b);
+      return orig[name]!(x, y);
+    };
+    return (a, b) => {
+      if (!containsOffset(a) && !containsOffset(b)) return orig[name]!(a, b);
+      if (isCollection(a) && isCollection(b) && !elementwiseOnly) {
+        throw new UnitsError("ambiguous_offset", `${name} of two arrays holding offset temperatures or gauge pressures: convert them first, e.g. (T to K) or (P to bara)`);
+      }
+      if (isCollection(b) && op === "divide" && !elementwiseOnly) {
+        throw new UnitsError("ambiguous_offset", "dividing by an array holding offset quantities: convert it first, e.g. (T to K)");
+      }
+      return isCollection(a) || isCollection(b) ? elementwise(math, scalar, a, b) : scalar(a, b);
+    };
+  };
+
+  const powLike = (name: string): Binary => (a, b) => {
+    if (containsOffset(a)) {
+      if (isCollection(a)) elementwise(math, (x, p) => (checkPower(math, x, p), x), a, b);
+      else checkPower(math, a, b);
+    }
+    return orig[name]!(a, b);
+  };
+
+  const compareLike = (name: string): Binary => (a, b) =>
+    containsOffset(a) || containsOffset(b)
+      ? isCollection(a) || isCollection(b)
+        ? elementwise(math, (x, y) => orig[name]!(comparable(math, x), comparable(math, y)), a, b)
+        : orig[name]!(comparable(math, a), comparable(math, b))
+      : orig[name]!(a, b);
+
+  const binary = (name: string, f: Binary) =>
+    math.typed(name, {
+      "any, any": f,
+      "any, any, ...any": (a: unknown, b: unknown, rest: unknown[]) => rest.reduce((acc, c) => f(acc, c), f(a, b)),
+    });
+
+  const sum = (...args: unknown[]): unknown => {
+    const items = args.length === 1 && isCollection(args[0]) ? (isMatrix(args[0]) ? (args[0].valueOf() as unknown[]) : (args[0] as unknown[])).flat(Infinity) : args;
+    if (items.filter(isOffsetQuantity).length > 1) {
+      throw new UnitsError("absolute_plus_absolute", "sum of several absolute temperatures or gauge pressures has no meaning; sum differences (e.g. in K or bar) or convert first with (T to K)");
+    }
+    return orig.sum!(...args);
+  };
+
+  // The mean of absolute temperatures is itself absolute: average the absolute values.
+  const mean = (...args: unknown[]): unknown => {
+    if (!args.some(containsOffset)) return orig.mean!(...args);
+    const flat = args.length === 1 && isCollection(args[0]) ? (isMatrix(args[0]) ? (args[0].valueOf() as unknown[]) : (args[0] as unknown[])).flat(Infinity) : args;
+    if (!flat.every(isOffsetQuantity)) {
+      throw new UnitsError("ambiguous_offset", "mean of offset temperatures or gauge pressures mixed with other values: convert them first, e.g. (T to K)");
+    }
+    const first = flat[0] as Unit;
+    return (orig.mean!(flat.map((x) => absoluteOf(math, x as Unit))) as Unit).to(first.units[0]!.unit.name);
+  };
+
+  const overrides: Record<string, unknown> = {
+    add: binary("add", sumLike("add")),
+    subtract: math.typed("subtract", { "any, any": sumLike("subtract") }),
+    multiply: binary("multiply", productLike("multiply", "multiply", false)),
+    divide: math.typed("divide", { "any, any": productLike("divide", "divide", false) }),
+    dotMultiply: math.typed("dotMultiply", { "any, any": productLike("dotMultiply", "multiply", true) }),
+    dotDivide: math.typed("dotDivide", { "any, any": productLike("dotDivide", "divide", true) }),
+    pow: math.typed("pow", { "any, any": powLike("pow") }),
+    dotPow: math.typed("dotPow", { "any, any": powLike("dotPow") }),
+    sum: math.typed("sum", { "...any": (args: unknown[]) => sum(...args) }),
+    mean: math.typed("mean", { "...any": (args: unknown[]) => mean(...args) }),
+  };
+  for (const n of ["compare", "equal", "unequal", "larger", "largerEq", "smaller", "smallerEq"]) {
+    overrides[n] = math.typed(n, { "any, any": compareLike(n) });
+  }
+  math.import(overrides, { override: true });
+}
