@@ -1,0 +1,33 @@
+/**
+ * lib/thermo public API: SI numbers in, SI numbers out (K, Pa, m^3/mol, J/mol, J/(mol K)).
+ * Other folders import thermo only through this file.
+ *
+ * Models: `vdw(fluid)`, `rk(fluid)`, `srk(fluid)`, `pr(fluid)`, `idealGas(fluid)` build an EosModel for a
+ * Fluid {components: Substance[], x, kij?}; `pureFluid(substance)` makes the one-component fluid.
+ * States: `state(model, T, P, {phase, idealGas})`, `stateFrom(model, {two of T,P,V,H,S,U}, {idealGas})`,
+ * `change(s1, s2)`. Departures: `departure(model, T, P, {phase, route: "closed" | "integrate"})`,
+ * `maxwellResidual(model, T, V)`, `internalPressure(model, T, V)`. Saturation: `psat(model, T)`,
+ * `tsat(model, P)`. Errors: ThermoError {argument, message}.
+ */
+export { R, P_REF, T_REF, P_ATM } from "./constants.js";
+export { ThermoError } from "./errors.js";
+export type { EosModel, Fluid, Residual } from "./eos/types.js";
+export { validateFluid, pureFluid } from "./eos/fluid.js";
+export { cubicModel, type CubicModel, type CubicParameters } from "./eos/cubic.js";
+export { criticalConstants } from "./eos/criticalConstants.js";
+export { idealGas } from "./eos/idealgas.js";
+export { vdw, VDW } from "./eos/vdw.js";
+export { rk, RK } from "./eos/rk.js";
+export { srk, SRK, srkSlope } from "./eos/srk.js";
+export { pr, PR, prKappa } from "./eos/pr.js";
+export { prStateFast } from "./eos/prFast.js";
+export {
+  selectRoot, pseudoCritical, checkPhase,
+  type PhaseRequest, type PhaseLabel, type StateFlags, type RootChoice,
+} from "./eos/phase.js";
+export { departure, type DepartureOptions, type DepartureResult, type DepartureRoute } from "./departure/departure.js";
+export { maxwellResidual, type MaxwellOptions, type MaxwellResidual } from "./departure/maxwell.js";
+export { internalPressure } from "./departure/internalPressure.js";
+export { psat, tsat, type Saturation } from "./equilibrium/saturation.js";
+export { wilsonPsat, wilsonTsat } from "./equilibrium/wilson.js";
+export { state, stateFrom, change, type ThermoState, type StateOptions, type IdealGasFunctions, type Spec, type StateChange } from "./state.js";
