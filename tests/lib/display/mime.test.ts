@@ -1,5 +1,5 @@
 import { describe, expect, it } from "vitest";
-import { MIME } from "../../../lib/display/mime.js";
+import { MIME, VEGA_LITE_SCHEMA } from "../../../lib/display/mime.js";
 
 describe("MIME", () => {
   it("MIME uses the Jupyter / IANA type strings front ends render", () => {
@@ -13,5 +13,13 @@ describe("MIME", () => {
   it("MIME types are unique", () => {
     const values = Object.values(MIME);
     expect(new Set(values).size).toBe(values.length);
+  });
+});
+
+describe("VEGA_LITE_SCHEMA", () => {
+  it("VEGA_LITE_SCHEMA has the major version of the Vega-Lite MIME type", () => {
+    // Source: Vega-Lite schema URLs are https://vega.github.io/schema/vega-lite/v<major>.json.
+    const major = /vegalite\.v(\d+)\+json$/.exec(MIME.vegalite)![1];
+    expect(VEGA_LITE_SCHEMA).toBe(`https://vega.github.io/schema/vega-lite/v${major}.json`);
   });
 });
