@@ -9,7 +9,8 @@ import { BUILTINS } from "./builtins/index.js";
 import { bindBuiltin } from "./builtins/bind.js";
 import type { BuiltinContext, BuiltinDef } from "./builtins/define.js";
 import { createRestrictedMath, DISABLED_NAMES } from "./mathInstance.js";
-import { createUnitsBridge, SI_UNITS } from "./unitsBridge.js";
+import { installUnits } from "../units/index.js";
+import { createUnitsBridge } from "./unitsBridge.js";
 import { createColumnFactory } from "./values/column.js";
 import { createFormatter } from "./format.js";
 import { scanCell, positionOf } from "./statements.js";
@@ -48,6 +49,7 @@ export function createSessionWithInternals(options: SessionOptions): { session: 
   let ctx: BuiltinContext | undefined;
   const getCtx = () => ctx!;
   const { math, parse } = createRestrictedMath({
+    installUnits,
     functions: (m) => Object.fromEntries(BUILTINS.map((def) => [def.name, bindBuiltin(def, m, getCtx)])),
   });
 
@@ -66,8 +68,7 @@ export function createSessionWithInternals(options: SessionOptions): { session: 
     warn: (t) => sink.stdout(`warning: ${t}\n`),
     units,
     column: (si, dimOrUnit, displayUnit) => {
-      const siUnit = SI_UNITS[dimOrUnit] ?? dimOrUnit;
-      return column(si, siUnit, displayUnit ?? siUnit);
+      return column(si, units.siUnitOf(dimOrUnit), displayUnit ?? units.displayUnitFor(si, dimOrUnit));
     },
     call: (fn, ...args) => {
       if (typeof fn !== "function") throw new Error(`expected a function, got ${formatter.text(fn)}`);

@@ -56,7 +56,7 @@ export function createFormatter(math: MathJsInstance, units: UnitsBridge): Forma
       const f = value as { syntax?: string; name?: string };
       return f.syntax ?? `${f.name || "function"}(...)`;
     }
-    if (math.isUnit(value)) return units.formatQuantity(value, PRECISION);
+    if (math.isUnit(value)) return units.formatQuantity(value);
     if (isRichValue(value)) return value.toText();
     if (isQuantityColumn(value)) {
       const si = value.si;
