@@ -1,7 +1,7 @@
 /**
  * IAPWS-IF97 region 1 (compressed liquid): basic equation and backward equations.
  * Coefficients transcribed from the IAPWS publication named beside each table; every number is the
- * printed 14-significant-digit value. Dimensionless; see the equation cited for the reducing quantities.
+ * printed value (14 significant digits in the IF97 release, 15 in the supplementary releases). Dimensionless; see the equation cited for the reducing quantities.
  */
 import type { Terms } from "./terms.js";
 
@@ -79,10 +79,10 @@ export const REGION1_P_HS: Terms = {
     0, 1, 10, 4, 1, 4, 0,
   ],
   n: [
-    -6.9199701466058e-1, -1.8361254878756e1, -9.2833240929734e0, 6.5963956990991e1,
-    -1.6206038891202e1, 4.5062001733867e2, 8.5468067822417e2, 6.0752321400116e3,
-    3.2648768262186e1, -2.6940884458293e1, -3.199478483343e2, -9.2835430704332e2,
-    3.0363453745525e1, -6.5054042244415e1, -4.3099131651613e3, -7.4751232409607e2,
-    7.3000034552925e2, 1.1428403256902e3, -4.3640704187456e2,
+    -6.91997014660582e-1, -1.8361254878756e1, -9.28332409297335e0, 6.59639569909906e1,
+    -1.62060388912024e1, 4.50620017338667e2, 8.5468067822417e2, 6.07523214001162e3,
+    3.26487682621856e1, -2.69408844582931e1, -3.199478483343e2, -9.2835430704332e2,
+    3.03634537455249e1, -6.50540422444146e1, -4.3099131651613e3, -7.47512324096068e2,
+    7.30000345529245e2, 1.14284032569021e3, -4.36407041874559e2,
   ],
 };

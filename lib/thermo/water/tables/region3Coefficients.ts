@@ -1,7 +1,7 @@
 /**
  * IAPWS-IF97 region 3 (near-critical): basic equation in Helmholtz free energy f(rho,T).
  * Coefficients transcribed from the IAPWS publication named beside each table; every number is the
- * printed 14-significant-digit value. Dimensionless; see the equation cited for the reducing quantities.
+ * printed value (14 significant digits in the IF97 release, 15 in the supplementary releases). Dimensionless; see the equation cited for the reducing quantities.
  */
 import type { Terms } from "./terms.js";
 

@@ -1,7 +1,7 @@
 /**
  * IAPWS-IF97 region 5 (high-temperature steam, 1073.15 K to 2273.15 K, p <= 50 MPa).
  * Coefficients transcribed from the IAPWS publication named beside each table; every number is the
- * printed 14-significant-digit value. Dimensionless; see the equation cited for the reducing quantities.
+ * printed value (14 significant digits in the IF97 release, 15 in the supplementary releases). Dimensionless; see the equation cited for the reducing quantities.
  */
 import type { Terms } from "./terms.js";
 
