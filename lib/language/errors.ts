@@ -66,7 +66,7 @@ function explain(err: unknown, text: string, names: NameSource): Located {
   if (m) {
     return { kind: "TypeError", message: `${m[1]}(): argument ${Number(m[4]) + 1} has the wrong type (expected ${m[2]}, got ${m[3]})`, offset: findWord(text, m[1]!) };
   }
-  m = /^No access to (?:property|method) "([^"]+)"/.exec(message);
+  m = /^(?:No access to (?:property|method)|Cannot access method) "([^"]+)"/.exec(message);
   if (m) {
     const at = text.indexOf(m[1]!);
     return { kind: "SecurityError", message: `access to "${m[1]}" is not allowed in cells`, offset: at, width: Array.from(m[1]!).length };

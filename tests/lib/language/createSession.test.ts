@@ -1,0 +1,81 @@
+import { describe, expect, it } from "vitest";
+import { createSession } from "../../../lib/language/index.js";
+import { createSessionWithInternals } from "../../../lib/language/createSession.js";
+import type { MimeBundle } from "../../../lib/display/index.js";
+
+function capture() {
+  const out: string[] = [];
+  const shown: string[] = [];
+  return { out, shown, sink: { stdout: (t: string) => out.push(t), display: (b: MimeBundle) => shown.push(b["text/plain"]), clear() {} } };
+}
+const text = (r: ReturnType<ReturnType<typeof createSession>["run"]>) => (r.ok ? r.result?.["text/plain"] : `ERROR ${r.error.evalue}`);
+
+describe("run", () => {
+  it("run shows earlier visible values via display and the last as the result; `;` hides", () => {
+    const s = createSession({ shouldStop: () => false });
+    const c = capture();
+    const r = s.run("# comment line\n\na = 2 bar\nb = a * 2;  # hidden\nb\nb to kPa", c.sink);
+    expect(c.shown).toEqual(["a = 2 bar", "4 bar"]);
+    // 4 bar = 400 kPa (bar = 100 kPa, NIST SP 811 B.8).
+    expect(text(r)).toBe("400 kPa");
+  });
+  it("run keeps variables and functions across cells and after errors", () => {
+    const s = createSession({ shouldStop: () => false });
+    const c = capture();
+    s.run("f(x) = 2 x\nk = 3", c.sink);
+    expect(s.run("k = 10\nundefinedThing + 1\nk = 99", c.sink).ok).toBe(false);
+    expect(text(s.run("f(k)", c.sink))).toBe("20");
+  });
+  it("run stops between statements when shouldStop is true and keeps earlier assignments", () => {
+    let calls = 0;
+    const { session, internals } = createSessionWithInternals({ shouldStop: () => ++calls > 2 });
+    const r = session.run("a1 = 1\na2 = 2\na3 = 3\na4 = 4", capture().sink);
+    expect(r.ok).toBe(false);
+    if (!r.ok) {
+      expect(r.error.ename).toBe("Interrupted");
+      expect(r.error.evalue).toMatch(/line 3, column 1/);
+    }
+    expect(internals.scope.get("a2")).toBe(2);
+    expect(internals.scope.has("a3")).toBe(false);
+  });
+  it("run reports line, column and a caret under an unknown name, with suggestions", () => {
+    const s = createSession({ shouldStop: () => false });
+    s.run("pressure1 = 3 bar", capture().sink);
+    const r = s.run("x = 1\ny = 2 *  pressur1", capture().sink);
+    expect(r.ok).toBe(false);
+    if (r.ok) return;
+    expect(r.error.ename).toBe("NameError");
+    expect(r.error.evalue).toBe('unknown name "pressur1"; did you mean "pressure1"? (line 2, column 10)');
+    expect(r.error.traceback.slice(-2)).toEqual(["    y = 2 *  pressur1", "             ^^^^^^^^"]);
+  });
+  it("run points a syntax error at its column on the right line", () => {
+    const r = createSession({ shouldStop: () => false }).run("a = 1\nb = (2 + * 3)", capture().sink);
+    expect(r.ok).toBe(false);
+    if (!r.ok) {
+      expect(r.error.ename).toBe("SyntaxError");
+      expect(r.error.evalue).toMatch(/line 2, column 1[01]\)/);
+    }
+  });
+  it("run translates a wrong dimension in a built-in into argument/expected/got", () => {
+    const r = createSession({ shouldStop: () => false }).run("span(1 K, 2 K, 3 bar)", capture().sink);
+    expect(r.ok ? "" : r.error.evalue).toMatch(/argument n of span\(\) needs a plain number.*got 3 bar \(a pressure\)/);
+  });
+  it("run allows statements spanning lines inside brackets and strings containing # and ;", () => {
+    const s = createSession({ shouldStop: () => false });
+    const r = s.run('t = "a#b;c"\nm = [1, 2;\n 3, 4]\nsize(m)', capture().sink);
+    expect(text(r)).toBe("[2, 2]");
+  });
+  it("run keeps offsets honest: difference of two absolute temperatures is in K", () => {
+    // 80 degC - 20 degC is a difference of 60 K (ITS-90: the degree Celsius equals the kelvin in size).
+    const r = createSession({ shouldStop: () => false }).run("(80 degC - 20 degC) to K", capture().sink);
+    expect(text(r)).toBe("60 K");
+  });
+});
+
+describe("evaluateExpression", () => {
+  it("evaluateExpression returns the value without displays and sees the scope", () => {
+    const s = createSession({ shouldStop: () => false });
+    s.run("q = 5", capture().sink);
+    expect(text(s.evaluateExpression("q * 2"))).toBe("10");
+  });
+});
