@@ -122,14 +122,17 @@ export function cubicModel(parameters: CubicParameters, fluid: Fluid, options: {
       const c0 = -(Pm * B * B * (B + 1) + A * B);
       const out: number[] = [];
       for (const z0 of cubicRoots(c2, c1, c0)) {
+        // Newton polish, each step kept only if it lowers |f|: near a double or triple root f' -> 0 and a
+        // raw step on rounding noise could throw the root far away.
         let z = z0;
-        for (let k = 0; k < 3; k++) {
-          const f = ((z + c2) * z + c1) * z + c0;
+        let f = ((z + c2) * z + c1) * z + c0;
+        for (let k = 0; k < 3 && f !== 0; k++) {
           const d = (3 * z + 2 * c2) * z + c1;
-          if (d === 0) break;
-          const step = f / d;
-          z -= step;
-          if (Math.abs(step) <= 1e-15 * Math.abs(z)) break;
+          const zn = z - f / d;
+          const fn = ((zn + c2) * zn + c1) * zn + c0;
+          if (!(Math.abs(fn) < Math.abs(f))) break;
+          z = zn;
+          f = fn;
         }
         if (z > B && Number.isFinite(z)) out.push((z * RT) / P);
       }

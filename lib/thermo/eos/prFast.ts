@@ -41,7 +41,7 @@ export function prStateFast(T: number, P: number, Tc: number, Pc: number, omega:
     const r = Math.sqrt(-p / 3);
     const phi = Math.acos(Math.max(-1, Math.min(1, -q / (2 * r * r * r))));
     const zv = polish(2 * r * Math.cos(phi / 3) - c2 / 3, c2, c1, c0);
-    const zl = polish(2 * r * Math.cos((phi + 4 * Math.PI) / 3) - c2 / 3, c2, c1, c0);
+    const zl = polish(2 * r * Math.cos((phi + 2 * Math.PI) / 3) - c2 / 3, c2, c1, c0);
     Z = zl > B && lnphiOf(zl, A, B) < lnphiOf(zv, A, B) ? zl : zv;
   }
   const L = Math.log((Z + (1 + S2) * B) / (Z + (1 - S2) * B));
@@ -56,7 +56,10 @@ export function prStateFast(T: number, P: number, Tc: number, Pc: number, omega:
 function polish(z: number, c2: number, c1: number, c0: number): number {
   const f = ((z + c2) * z + c1) * z + c0;
   const d = (3 * z + 2 * c2) * z + c1;
-  return d !== 0 ? z - f / d : z;
+  const zn = z - f / d;
+  // Keep the step only if it helps: near a multiple root f' -> 0 and the step is noise.
+  const fn = ((zn + c2) * zn + c1) * zn + c0;
+  return Math.abs(fn) < Math.abs(f) ? zn : z;
 }
 
 function lnphiOf(Z: number, A: number, B: number): number {
