@@ -114,7 +114,7 @@ export function brent(
     const tol = 2 * EPS * Math.abs(b) + 0.5 * (xtol + rtol * Math.abs(b)) + Number.MIN_VALUE;
     const m = 0.5 * (c - b);
     if (Math.abs(m) <= tol || fb === 0) {
-      return { value: b, error: Math.abs(c - b), residual: fb, evaluations, iterations: iter };
+      return { value: b, error: fb === 0 ? 0 : Math.abs(c - b), residual: fb, evaluations, iterations: iter };
     }
     if (Math.abs(e) >= tol && Math.abs(fa) > Math.abs(fb)) {
       let p: number, q: number;

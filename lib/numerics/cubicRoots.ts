@@ -57,6 +57,45 @@ function quadraticRoots(b1: number, b0: number, a2: number, a1: number, a0: numb
   }
 }
 
+/**
+ * Appends r and the real roots of the cubic divided by (x - r) = x^2 + b1 x + b0. Each quotient
+ * coefficient has two formulas: forward from the top (b1 = a2 + r, b0 = a1 + r b1) and backward from
+ * the constant term (b0 = -a0/r, b1 = (b0 - a1)/r). Each is taken from whichever formula has the
+ * smaller rounding bound: forward suits large remaining roots, backward small ones (a close pair of
+ * small roots next to a large one is what a cubic equation of state produces at low pressure).
+ */
+function deflated(r: number, a2: number, a1: number, a0: number, out: number[]): void {
+  out.push(r);
+  const f1 = a2 + r;
+  const f0 = a1 + r * f1;
+  let b1 = f1;
+  let b0 = f0;
+  if (r !== 0) {
+    const k0 = -a0 / r;
+    const k1 = (k0 - a1) / r;
+    const ar = Math.abs(r);
+    if ((Math.abs(k0) + Math.abs(a1)) / ar < Math.abs(a2) + ar) b1 = k1;
+    if (Math.abs(k0) < Math.abs(a1) + Math.abs(r * f1)) b0 = k0;
+  }
+  quadraticRoots(b1, b0, a2, a1, a0, out);
+  if (out.length === 3) {
+    out[1] = polish(out[1]!, a2, a1, a0);
+    out[2] = polish(out[2]!, a2, a1, a0);
+  }
+}
+
+/** Sorts 1 to 3 numbers in place without a comparator closure (this runs millions of times). */
+function ascending(r: number[]): number[] {
+  if (r.length < 2) return r;
+  let t: number;
+  if (r[0]! > r[1]!) { t = r[0]!; r[0] = r[1]!; r[1] = t; }
+  if (r.length === 3) {
+    if (r[1]! > r[2]!) { t = r[1]!; r[1] = r[2]!; r[2] = t; }
+    if (r[0]! > r[1]!) { t = r[0]!; r[0] = r[1]!; r[1] = t; }
+  }
+  return r;
+}
+
 /** All real roots of x^3 + a2 x^2 + a1 x + a0, ascending; length 1, 2 (never) or 3. */
 export function cubicRoots(a2: number, a1: number, a0: number): number[] {
   requireNumber("cubicRoots", "a2", a2);
@@ -67,7 +106,7 @@ export function cubicRoots(a2: number, a1: number, a0: number): number[] {
     // x (x^2 + a2 x + a1): exact zero root, quadratic for the rest.
     roots.push(0);
     quadraticRoots(a2, a1, a2, a1, a0, roots);
-    return roots.sort((x, y) => x - y);
+    return ascending(roots);
   }
   const shift = a2 / 3;
   const Q = (a2 * a2 - 3 * a1) / 9;
@@ -77,25 +116,17 @@ export function cubicRoots(a2: number, a1: number, a0: number): number[] {
     const sq = Math.sqrt(Q);
     const theta = Math.acos(Math.max(-1, Math.min(1, R / (sq * Q))));
     const m = -2 * sq;
-    roots.push(
-      polish(m * Math.cos(theta / 3) - shift, a2, a1, a0),
-      polish(m * Math.cos((theta + 2 * Math.PI) / 3) - shift, a2, a1, a0),
-      polish(m * Math.cos((theta - 2 * Math.PI) / 3) - shift, a2, a1, a0),
-    );
-    return roots.sort((x, y) => x - y);
+    // Take the largest-magnitude trigonometric root, polish it and deflate: the two others come from
+    // a quadratic, which resolves a close pair near a double root better than the trigonometric form.
+    const t0 = m * Math.cos(theta / 3) - shift;
+    const t1 = m * Math.cos((theta + 2 * Math.PI) / 3) - shift;
+    const t2 = m * Math.cos((theta - 2 * Math.PI) / 3) - shift;
+    const big = Math.abs(t0) >= Math.abs(t1) ? (Math.abs(t0) >= Math.abs(t2) ? t0 : t2) : Math.abs(t1) >= Math.abs(t2) ? t1 : t2;
+    deflated(polish(big, a2, a1, a0), a2, a1, a0, roots);
+    return ascending(roots);
   }
   const A = -Math.sign(R) * Math.cbrt(Math.abs(R) + Math.sqrt(R * R - Q3));
   const B = A !== 0 ? Q / A : 0;
-  const r = polish(A + B - shift, a2, a1, a0);
-  roots.push(r);
-  // Deflate: x^3 + a2 x^2 + a1 x + a0 = (x - r)(x^2 + b1 x + b0). Forward deflation is stable for the
-  // largest-magnitude root; otherwise b0 from the constant term is the stable choice.
-  const b1 = a2 + r;
-  const b0 = Math.abs(r * r * r) >= Math.abs(a0) ? a1 + r * b1 : -a0 / r;
-  quadraticRoots(b1, b0, a2, a1, a0, roots);
-  if (roots.length === 3) {
-    roots[1] = polish(roots[1]!, a2, a1, a0);
-    roots[2] = polish(roots[2]!, a2, a1, a0);
-  }
-  return roots.sort((x, y) => x - y);
+  deflated(polish(A + B - shift, a2, a1, a0), a2, a1, a0, roots);
+  return ascending(roots);
 }
