@@ -75,7 +75,11 @@ export function fromSI(math: MathJsInstance, x: number, dimOrUnit: DimensionName
     return si === "" ? x : math.unit(x, si);
   }
   const target = math.unit(dimOrUnit);
-  return math.unit(x, target.toSI().formatUnits()).to(dimOrUnit);
+  // Start from a single SI unit where one exists (Pa, K): mathjs applies a target's offset (psig,
+  // degC) only when converting from a non-compound unit.
+  const dim = dimensionOf(target);
+  const si = dim !== undefined && DIMENSIONS[dim].si !== "" ? DIMENSIONS[dim].si : target.toSI().formatUnits();
+  return math.unit(x, si).to(dimOrUnit);
 }
 
 /** fromSI over an array of SI numbers (a plain array of quantities, as span() returns). */

@@ -1,0 +1,38 @@
+import { describe, expect, it } from "vitest";
+import { chooseUnit, formatQuantity } from "../../../lib/units/format.js";
+import type { MathJsInstance } from "mathjs";
+import { loadMathjs } from "../../../lib/language/mathjs.js";
+import { installUnits } from "../../../lib/units/index.js";
+
+function mathWithUnits(): MathJsInstance {
+  const m = loadMathjs();
+  const math = m.create(m.all, {}) as unknown as MathJsInstance;
+  installUnits(math);
+  return math;
+}
+
+describe("formatQuantity", () => {
+  const math = mathWithUnits();
+  it("formatQuantity keeps the user's units and cancels repeats", () => {
+    expect(formatQuantity(math.evaluate("8.314462618 J/(mol K) * 25 degC"))).toBe("2479 J / mol"); // 2478.957 to 5 s.f.
+    expect(formatQuantity(math.unit(25, "degC"))).toBe("25 degC");
+    expect(formatQuantity(math.unit(5, "barg"))).toBe("5 barg");
+    expect(formatQuantity(math.unit(14.69594877551345, "psia"), { sig: 6 })).toBe("14.6959 psia");
+  });
+  it("formatQuantity picks engineering prefixes for SI results with auto", () => {
+    expect(formatQuantity(math.unit(2.5e6, "Pa"), { auto: true })).toBe("2.5 MPa");
+    expect(formatQuantity(math.unit(0.0244, "m^3/mol"), { auto: true })).toBe("24.4 L / mol");
+    expect(formatQuantity(math.unit(4.2e-5, "m^3/mol"), { auto: true })).toBe("42 cm^3 / mol");
+    expect(formatQuantity(math.unit(-1234.5, "J/mol"), { auto: true, sig: 4 })).toBe("-1.234 kJ / mol");
+    expect(formatQuantity(math.unit(300, "K"), { auto: true })).toBe("300 K");
+  });
+  it("formatQuantity uses exponents for very large and small numbers and clamps sig", () => {
+    expect(formatQuantity(1.23456789e12, { sig: 9 })).toBe("1.23457e12");
+    expect(formatQuantity(1.5e-7)).toBe("1.5e-7");
+    expect(formatQuantity(0)).toBe("0");
+  });
+  it("chooseUnit leaves unknown dimensions alone", () => {
+    const u = math.unit(3, "m/s^3");
+    expect(chooseUnit(u)).toBe(u);
+  });
+});

@@ -1,0 +1,31 @@
+import { describe, expect, it } from "vitest";
+import type { Unit } from "mathjs";
+import { cancelUnits } from "../../../lib/units/simplify.js";
+import type { MathJsInstance } from "mathjs";
+import { loadMathjs } from "../../../lib/language/mathjs.js";
+import { installUnits } from "../../../lib/units/index.js";
+
+function mathWithUnits(): MathJsInstance {
+  const m = loadMathjs();
+  const math = m.create(m.all, {}) as unknown as MathJsInstance;
+  installUnits(math);
+  return math;
+}
+
+describe("cancelUnits", () => {
+  const math = mathWithUnits();
+  it("cancelUnits removes K/K and keeps the user's units", () => {
+    const u = cancelUnits(math.evaluate("8.314462618 J/(mol K) * 298.15 K")) as Unit;
+    expect(u.formatUnits()).toBe("J / mol");
+    expect(u.toNumber("J/mol")).toBeCloseTo(2478.957, 3); // R T at 298.15 K, scipy.constants R
+  });
+  it("cancelUnits merges g and kg", () => {
+    const u = cancelUnits(math.evaluate("2 kJ/(kg K) * 16 g/mol")) as Unit;
+    expect(u.units.length).toBe(3);
+    expect(u.toNumber("J/(mol K)")).toBeCloseTo(32, 9); // 2 J/(g K) x 16 g/mol
+  });
+  it("cancelUnits leaves simple units alone", () => {
+    const u = math.unit(3, "bar");
+    expect(cancelUnits(u)).toBe(u);
+  });
+});
