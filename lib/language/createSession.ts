@@ -10,7 +10,7 @@ import { bindBuiltin } from "./builtins/bind.js";
 import type { BuiltinContext, BuiltinDef } from "./builtins/define.js";
 import { createRestrictedMath, DISABLED_NAMES } from "./mathInstance.js";
 import { installUnits } from "../units/index.js";
-import { createUnitsBridge } from "./unitsBridge.js";
+import { createUnitsBridge, type UnitsBridge } from "./unitsBridge.js";
 import { createColumnFactory } from "./values/column.js";
 import { createFormatter } from "./format.js";
 import { scanCell, positionOf } from "./statements.js";
@@ -40,6 +40,7 @@ export interface SessionInternals {
   knownNames(): string[];
   unitNames(): string[];
   formatText(value: unknown): string;
+  units: UnitsBridge;
 }
 
 export function createSessionWithInternals(options: SessionOptions): { session: Session; internals: SessionInternals } {
@@ -146,7 +147,7 @@ export function createSessionWithInternals(options: SessionOptions): { session: 
     }
   };
 
-  const internals: SessionInternals = { math, scope, registry, knownNames, unitNames, formatText: formatter.text };
+  const internals: SessionInternals = { math, scope, registry, knownNames, unitNames, formatText: formatter.text, units };
   const session: Session = {
     run,
     evaluateExpression: (expression) => run(expression, SILENT_SINK),

@@ -14,7 +14,7 @@ const escapeHtml = (s: string) => s.replace(/&/g, "&amp;").replace(/</g, "&lt;")
 export function nameAt(code: string, offset: number): string | undefined {
   const word = /[A-Za-z_][A-Za-z_0-9]*$/.exec(code.slice(0, offset))?.[0] ?? "";
   const rest = /^[A-Za-z_0-9]*/.exec(code.slice(offset))![0];
-  if (word + rest) return word + rest;
+  if (/^[A-Za-z_]/.test(word + rest)) return word + rest;
   let depth = 0;
   for (let i = offset - 1; i >= 0; i--) {
     const ch = code[i]!;
@@ -56,7 +56,10 @@ export function inspectAt(internals: SessionInternals, code: string, cursorPos: 
   }
   if (internals.unitNames().includes(name)) {
     const u = internals.math.unit(1, name);
-    return { found: true, bundle: { [MIME.text]: `${name}: unit, 1 ${name} = ${internals.formatText(u.toSI())}` } };
+    const dim = internals.units.dimensionOf(u);
+    const si = dim ? internals.units.siUnitOf(dim) : "";
+    const size = si ? u.to(si) : u.toSI();
+    return { found: true, bundle: { [MIME.text]: `${name}: unit${dim ? ` of ${dim.replace(/_/g, " ")}` : ""}, 1 ${name} = ${internals.formatText(size)}` } };
   }
   return { found: false };
 }

@@ -5,10 +5,12 @@
 import type { BuiltinDef } from "./define.js";
 import { ranges } from "./ranges.js";
 import { cell } from "./cell.js";
+import { display } from "./display.js";
 
 export const BUILTINS: readonly BuiltinDef[] = [
   ...ranges,
   ...cell,
+  ...display,
 ];
 
 export { defineBuiltin, signatureOf, type BuiltinDef, type BuiltinContext, type BuiltinArgs, type ParamSpec, type ParamType } from "./define.js";
