@@ -14,7 +14,7 @@ export type DepartureRoute = "closed" | "integrate";
 export interface DepartureOptions {
   phase?: PhaseRequest;
   route?: DepartureRoute;
-  /** Quadrature relative tolerance of the "integrate" route (default 1e-12). */
+  /** Quadrature relative tolerance of the "integrate" route (default 1e-10). */
   rel?: number;
   shouldStop?: () => boolean;
 }

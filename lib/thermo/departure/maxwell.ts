@@ -25,7 +25,7 @@ import { ThermoError, requirePositive } from "../errors.js";
 import type { EosModel, Residual } from "../eos/types.js";
 
 export interface MaxwellOptions {
-  /** Relative tolerance of each quadrature (default 1e-12). */
+  /** Relative tolerance of each quadrature (default 1e-10). */
   rel?: number;
   /** Poll for interruption. */
   shouldStop?: () => boolean;
@@ -53,8 +53,11 @@ export function maxwellResidual(model: EosModel, T: number, V: number, options: 
   requirePositive("T", T, "K");
   requirePositive("V", V, "m^3/mol");
   const pressure = requirePressure(model);
-  const rel = options.rel ?? 1e-12;
-  const quad = { rel, abs: 0, maxEval: 200_000, shouldStop: options.shouldStop };
+  const rel = options.rel ?? 1e-10;
+  // No end-point smoothing: the integrands are smooth on [0, rho] (they tend to second-virial terms).
+  // Absolute floors (1e-11 RT, 1e-11 R) let exactly-zero integrals (ideal gas) terminate; the numerical
+  // temperature derivative carries ~1e-12 relative noise, so rel much below 1e-11 cannot be met.
+  const quad = { rel, abs: 1e-11 * R * T, maxEval: 200_000, smooth: false, shouldStop: options.shouldStop };
   let evaluations = 0;
   const Pr = (t: number, rho: number) => {
     evaluations++;
@@ -65,8 +68,12 @@ export function maxwellResidual(model: EosModel, T: number, V: number, options: 
     throw new ThermoError("V", `${model.label}: P(T = ${T} K, V = ${V} m^3/mol) = ${P} Pa is not a positive pressure`);
   }
   const rho = 1 / V;
-  const a = integrate((r) => Pr(T, r) / (r * r), 0, rho, quad);
-  const s = integrate((r) => -derivative((t) => Pr(t, r), T).value / (r * r), 0, rho, quad);
+  // Below rCut the integrand is held at its value at rCut: P^r = P - RT rho loses digits to cancellation
+  // as rho -> 0 (noise ~ eps RT / rho after dividing by rho^2), while the integrand itself is flat there;
+  // the approximation costs < 1e-10 relative (rCut^2/2 times a slope of order integrand / rho_liquid).
+  const rCut = 1e-5 * rho;
+  const a = integrate((r) => { const q = Math.max(r, rCut); return Pr(T, q) / (q * q); }, 0, rho, quad);
+  const s = integrate((r) => { const q = Math.max(r, rCut); return -derivative((t) => Pr(t, q), T).value / (q * q); }, 0, rho, { ...quad, abs: 1e-11 * R });
   const RT = R * T;
   const Z = (P * V) / RT;
   const lnZ = Math.log(Z);
@@ -88,7 +95,7 @@ function componentLnphi(
   rho: number,
   lnZ: number,
   lnphi: number,
-  quad: { rel: number; abs: number; maxEval: number; shouldStop?: () => boolean },
+  quad: { rel: number; abs: number; maxEval: number; smooth: boolean; shouldStop?: () => boolean },
   count: () => void,
 ): number[] {
   const x = model.fluid.x;
@@ -107,7 +114,9 @@ function componentLnphi(
       const m = at.call(model, xh);
       return m.pressure!(T, 1 / (r * N)) - (RT * N * r);
     };
-    const value = integrate((r) => derivative((h) => Prn(h, r), 0, { h: 1e-3 }).value / (RT * r * r), 0, rho, quad).value;
+    const rCut = 1e-5 * rho;
+    const g = (r: number) => { const q = Math.max(r, rCut); return derivative((h) => Prn(h, q), 0, { h: 1e-3 }).value / (RT * q * q); };
+    const value = integrate(g, 0, rho, { ...quad, abs: 1e-11 }).value;
     return value - lnZ;
   });
 }
