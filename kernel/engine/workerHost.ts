@@ -25,7 +25,7 @@ interface Pending {
 
 const here = import.meta.url;
 const fromSource = here.endsWith(".ts");
-/** Compiled builds run worker.js; under the test runner (TypeScript sources) the worker needs tsx. */
+/** Compiled builds run worker.js; under the test runner (TypeScript sources) the worker loads worker.ts through tsx. */
 const WORKER_URL = new URL(fromSource ? "./worker.ts" : "./worker.js", here);
 const DEFAULT_SESSION_MODULE = new URL(fromSource ? "../../lib/language/index.ts" : "../../lib/language/index.js", here).href;
 
@@ -54,7 +54,10 @@ export class WorkerEngine implements Interpreter {
   private spawn(): void {
     this.generation++;
     const data: WorkerData = { flag: this.flag.buffer as SharedArrayBuffer, sessionModule: this.sessionModule };
-    const worker = new Worker(WORKER_URL, { workerData: data, execArgv: fromSource ? ["--import", "tsx"] : [], stdout: false, stderr: false });
+    const worker = fromSource
+      ? // Under the test runner the sources are TypeScript: register tsx inside the worker, then load the entry.
+        new Worker(`import("tsx/esm/api").then((m) => { m.register(); return import(${JSON.stringify(WORKER_URL.href)}); })`, { eval: true, workerData: data })
+      : new Worker(WORKER_URL, { workerData: data });
     worker.unref();
     worker.on("message", (m: FromWorker) => this.onMessage(m));
     worker.on("error", (e) => {
