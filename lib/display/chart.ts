@@ -135,8 +135,10 @@ export function chartSpec(spec: ChartSpec): Record<string, unknown> {
       legend: { symbolType: "stroke", symbolSize: 420, symbolStrokeWidth: 1.8 },
     };
   }
-  const title = spec.title
-    ? { title: spec.subtitle ? { text: spec.title, subtitle: spec.subtitle } : { text: spec.title } }
+  // Notes (cautions) ride in the subtitle so they stay visible in the SVG and PNG copies.
+  const sub = [...(spec.subtitle ? [spec.subtitle] : []), ...(spec.notes ?? []).map((n) => `Note: ${n}`)];
+  const title = spec.title || sub.length
+    ? { title: { text: spec.title ?? "", ...(sub.length ? { subtitle: sub.length === 1 ? sub[0] : sub } : {}) } }
     : {};
   return {
     $schema: VEGA_LITE_SCHEMA,

@@ -58,6 +58,14 @@ describe("chartSpec", () => {
   });
 });
 
+describe("chartSpec notes", () => {
+  it("chartSpec shows notes under the title so the pictures carry them", () => {
+    const s = chartSpec({ ...base, subtitle: "PR model", notes: ["near the critical point"] }) as Obj;
+    expect(s.title).toEqual({ text: "Isotherm", subtitle: ["PR model", "Note: near the critical point"] });
+    expect((chartSpec({ ...base, title: undefined }) as Obj).title).toBeUndefined();
+  });
+});
+
 describe("chartSummary", () => {
   it("chartSummary states axes with units, ranges and points per series", () => {
     const t = chartSummary(base);

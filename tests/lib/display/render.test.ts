@@ -84,6 +84,7 @@ describe("compileVegaLite", () => {
     const two = { ...spec, series: [...spec.series, { label: "400 K", style: "PR", x: [1, 2], y: [1, 0.99] }] };
     await expect(compileVegaLite(chartSpec(two))).resolves.toHaveProperty("marks");
     await expect(compileVegaLite(chartSpec({ ...spec, mark: "line+point", x: { ...spec.x, log: true } }))).resolves.toBeTruthy();
+    await expect(compileVegaLite(chartSpec({ ...spec, mark: "point", notes: ["a", "b"], y: { title: "Z", domain: [0, 2] } }))).resolves.toBeTruthy();
     // An encoding with an unknown type makes vega-lite warn; the wrapper turns that into an error.
     const bad = { ...chartSpec(spec), encoding: { x: { field: "x", type: "quantitative", aggregate: "nonsense" } } };
     await expect(compileVegaLite(bad)).rejects.toThrow(/Vega-Lite compiler reported/);
