@@ -136,3 +136,14 @@ describe("renderPending", () => {
     expect(MIME.svg in out).toBe(false);
   });
 });
+
+describe("render loading", () => {
+  it("renderChart's libraries are imported lazily: no static import of vega, vega-lite or resvg in lib/display", async () => {
+    const { readdirSync, readFileSync } = await import("node:fs");
+    const dir = new URL("../../../lib/display/", import.meta.url);
+    for (const f of readdirSync(dir).filter((n) => n.endsWith(".ts"))) {
+      const src = readFileSync(new URL(f, dir), "utf8");
+      expect(src, f).not.toMatch(/^\s*import\s[^;]*from\s+["'](vega|vega-lite|@resvg\/resvg-js)["']/m);
+    }
+  });
+});
