@@ -96,7 +96,8 @@ export function chartSpec(spec: ChartSpec): Record<string, unknown> {
       type: a.log ? "log" : "linear",
       ...(a.log ? {} : { zero: a.zero ?? false }),
       ...(a.domain ? { domain: [...a.domain] } : {}),
-      nice: !a.domain,
+      // A "nice" log domain jumps a whole decade past the data; keep log axes tight.
+      nice: !a.domain && !a.log,
     },
     axis: a.log ? { format: "~g", grid: true } : { grid: true },
   });
