@@ -22,6 +22,8 @@ export interface VirialModel extends EosModel {
   second(T: number): { B: number; dBdT: number };
   /** Warnings for states beyond the truncated virial equation's range (empty when inside). */
   validity(T: number, P: number): string[];
+  /** The same model for another composition (used by the numerical route's component fugacities). */
+  atComposition(x: readonly number[]): VirialModel;
 }
 
 /** Truncated virial model of a pure fluid or mixture. */
@@ -65,6 +67,7 @@ export function virial(fluid: Fluid, correlation: VirialCorrelation = "abbott"):
     fluid,
     correlation,
     second,
+    atComposition: (xNew: readonly number[]) => virial({ ...fluid, x: xNew }, correlation),
 
     pressure(T: number, V: number): number {
       requirePositive("V", V, "m^3/mol");

@@ -32,8 +32,8 @@ export function reducedB(correlation: VirialCorrelation, Tr: number): ReducedB {
     return {
       B0: 0.083 - 0.422 / Tr ** 1.6,
       B1: 0.139 - 0.172 / Tr ** 4.2,
-      dB0: (0.675 / Tr ** 2.6),
-      dB1: (0.722 / Tr ** 5.2),
+      dB0: (0.422 * 1.6) / Tr ** 2.6,
+      dB1: (0.172 * 4.2) / Tr ** 5.2,
     };
   }
   return {
