@@ -41,17 +41,27 @@ export interface SessionInternals {
   unitNames(): string[];
   formatText(value: unknown): string;
   units: UnitsBridge;
+  /** The private parser (expressions cannot reach it). */
+  parse(code: string): MathNode;
 }
 
-export function createSessionWithInternals(options: SessionOptions): { session: Session; internals: SessionInternals } {
-  const registry = new Map(BUILTINS.map((d) => [d.name, d]));
-  if (registry.size !== BUILTINS.length) throw new Error("two built-ins share a name");
+/**
+ * The session plus its internals (scope, registry, instance) for tests and benchmarks. `extra`
+ * built-ins join the registry for this session only (tests, benchmarks); the product uses BUILTINS.
+ */
+export function createSessionWithInternals(
+  options: SessionOptions,
+  extra: readonly BuiltinDef[] = [],
+): { session: Session; internals: SessionInternals } {
+  const all = [...BUILTINS, ...extra];
+  const registry = new Map(all.map((d) => [d.name, d]));
+  if (registry.size !== all.length) throw new Error("two built-ins share a name");
   let sink: CellSink = SILENT_SINK;
   let ctx: BuiltinContext | undefined;
   const getCtx = () => ctx!;
   const { math, parse } = createRestrictedMath({
     installUnits,
-    functions: (m) => Object.fromEntries(BUILTINS.map((def) => [def.name, bindBuiltin(def, m, getCtx)])),
+    functions: (m) => Object.fromEntries(all.map((def) => [def.name, bindBuiltin(def, m, getCtx)])),
   });
 
   const units = createUnitsBridge(math);
@@ -147,7 +157,7 @@ export function createSessionWithInternals(options: SessionOptions): { session: 
     }
   };
 
-  const internals: SessionInternals = { math, scope, registry, knownNames, unitNames, formatText: formatter.text, units };
+  const internals: SessionInternals = { math, scope, registry, knownNames, unitNames, formatText: formatter.text, units, parse };
   const session: Session = {
     run,
     evaluateExpression: (expression) => run(expression, SILENT_SINK),

@@ -33,6 +33,8 @@ export function createColumnFactory(math: MathJsInstance): ColumnFactory {
     // subclass private fields exist.
     private _si: Float64Array;
     private _items: unknown[] | undefined;
+    /** True after a mutating matrix method ran: `si` must be read back from the items. */
+    private _dirty = false;
     readonly siUnit: string;
     readonly unit: string;
     constructor(si: Float64Array, siUnit: string, displayUnit: string) {
@@ -45,10 +47,11 @@ export function createColumnFactory(math: MathJsInstance): ColumnFactory {
     }
     get si(): Float64Array {
       // After an element assignment the matrix is the truth; read it back once.
-      if (this._items) {
-        const items = this._items;
+      if (this._dirty && this._items) {
+        const items = (this._items as unknown[]).flat(Infinity);
         this._si = Float64Array.from(items, (u) =>
           typeof u === "number" ? u : (u as Unit).toNumber(this.siUnit || ""));
+        this._dirty = false;
       }
       return this._si;
     }
@@ -70,7 +73,23 @@ export function createColumnFactory(math: MathJsInstance): ColumnFactory {
     }
     set _data(items: unknown[]) {
       this._items = items;
+      this._dirty = true;
     }
+  }
+  // The in-place mutators of DenseMatrix: after any of them the SI array is stale.
+  for (const method of ["subset", "set", "resize", "reshape", "swapRows"]) {
+    const base = (DenseMatrix.prototype as unknown as Record<string, (...a: unknown[]) => unknown>)[method];
+    if (typeof base !== "function") continue;
+    Object.defineProperty(Column.prototype, method, {
+      value: function (this: { _dirty: boolean; _data: unknown[] }, ...args: unknown[]) {
+        const mutates = method !== "subset" || args.length > 1;
+        if (mutates) void this._data; // materialise before the base method edits it
+        const out = base.apply(this, args);
+        if (mutates) this._dirty = true;
+        return out;
+      },
+      writable: true, configurable: true,
+    });
   }
   return (si, siUnit, displayUnit) => new Column(si, siUnit, displayUnit ?? siUnit) as unknown as QuantityColumn;
 }

@@ -1,0 +1,198 @@
+/**
+ * integrate, seek and slope: lib/numerics with units. Units are handled once at the edge: the bounds
+ * (or the point) are converted to SI numbers, f is probed once to learn the unit of its output, and
+ * the numerics loop then sees plain SI numbers (each call hands f an SI quantity and reads its SI
+ * output back). The result carries units of f times x (integrate), of x (seek) or of f over x (slope).
+ */
+import type { Unit } from "mathjs";
+import { brent, derivative, integrate, NumericsError, StopRequested } from "../../numerics/index.js";
+import { ArgumentError } from "./bind.js";
+import { defineBuiltin, type BuiltinContext, type BuiltinDef } from "./define.js";
+
+const isUnit = (x: unknown): x is Unit => typeof x === "object" && x !== null && (x as { isUnit?: boolean }).isUnit === true;
+
+/** The SI unit a quantity is computed in: the named dimension's unit when known, else its base units. */
+function siUnitOf(u: Unit, ctx: BuiltinContext): string {
+  const dim = ctx.units.dimensionOf(u);
+  return dim ? ctx.units.siUnitOf(dim) : u.toSI().formatUnits();
+}
+
+interface Axis {
+  /** SI unit of x ("" for plain numbers). */
+  unit: string;
+  /** The user's unit, for showing x-valued results. */
+  shown: string;
+  si: (value: unknown, name: string) => number;
+  quantity: (x: number) => unknown;
+}
+
+/** The x axis shared by the bound-like arguments (plain numbers and Infinity fit any axis). */
+function axisOf(fn: string, args: [string, unknown][], ctx: BuiltinContext): Axis {
+  const first = args.find(([, v]) => isUnit(v));
+  for (const [name, v] of args) {
+    if (!(typeof v === "number" || isUnit(v))) {
+      throw new ArgumentError(`argument ${name} of ${fn}() needs a number or a quantity, got ${ctx.textOf(v)}`);
+    }
+  }
+  if (!first) {
+    return { unit: "", shown: "", si: (v) => v as number, quantity: (x) => x };
+  }
+  const ref = first[1] as Unit;
+  const unit = siUnitOf(ref, ctx);
+  const si = (v: unknown, name: string): number => {
+    if (typeof v === "number") {
+      if (Number.isFinite(v) && v !== 0) {
+        throw new ArgumentError(`argument ${name} of ${fn}() needs a quantity like ${first[0]} (${ctx.textOf(ref)}), got the plain number ${v}; only 0 and Infinity may go without a unit`);
+      }
+      return v;
+    }
+    const u = v as Unit;
+    if (!u.equalBase(ref)) {
+      throw new ArgumentError(`argument ${name} of ${fn}() must have the same dimension as ${first[0]} (${ctx.textOf(ref)}), got ${ctx.textOf(u)}`);
+    }
+    return u.toNumber(unit);
+  };
+  return { unit, shown: ref.formatUnits(), si, quantity: (x) => ctx.units.fromSI(x, unit) };
+}
+
+/** f as a plain SI function: probes once at x0 to learn the output unit, then converts each call. */
+function plainFunction(fn: string, f: unknown, axis: Axis, x0: number, ctx: BuiltinContext): { g: (x: number) => number; yUnit: string } {
+  const probe = ctx.call(f, axis.quantity(x0));
+  let yUnit: string;
+  if (typeof probe === "number") yUnit = "";
+  else if (isUnit(probe)) yUnit = siUnitOf(probe, ctx);
+  else throw new ArgumentError(`argument f of ${fn}() must return a number or a quantity, got ${ctx.textOf(probe)} at x = ${ctx.textOf(axis.quantity(x0))}`);
+  const ref = probe;
+  const g = (x: number): number => {
+    const y = ctx.call(f, axis.quantity(x));
+    if (yUnit === "" && typeof y === "number") return y;
+    if (isUnit(y) && isUnit(ref) && y.equalBase(ref)) return y.toNumber(yUnit);
+    throw new ArgumentError(
+      `argument f of ${fn}() changed its output: ${ctx.textOf(y)} at x = ${ctx.textOf(axis.quantity(x))}, but ${ctx.textOf(ref)} at x = ${ctx.textOf(axis.quantity(x0))}`,
+    );
+  };
+  return { g, yUnit };
+}
+
+/** value in unit a*b (op "*") or a/b (op "/"); plain number when both are "". */
+function combine(value: number, a: string, b: string, op: "*" | "/", ctx: BuiltinContext): unknown {
+  if (a === "" && b === "") return value;
+  if (b === "") return ctx.units.fromSI(value, a);
+  const right = ctx.units.fromSI(1, b) as Unit;
+  if (a === "") return op === "*" ? (right.multiply(value) as unknown) : ((ctx.units.fromSI(value, b) as Unit).pow(-1) as Unit).multiply(value * value);
+  const left = ctx.units.fromSI(value, a) as Unit;
+  return op === "*" ? left.multiply(right) : left.divide(right);
+}
+
+/** Reads an options record of plain numbers (and booleans), naming unknown keys. */
+function optionsOf(fn: string, rec: unknown, allowed: readonly string[]): Record<string, unknown> {
+  if (rec === undefined) return {};
+  const out: Record<string, unknown> = {};
+  for (const [k, v] of Object.entries(rec as Record<string, unknown>)) {
+    if (!allowed.includes(k)) throw new ArgumentError(`argument options of ${fn}() has an unknown key "${k}"; valid keys: ${allowed.join(", ")}`);
+    out[k] = v;
+  }
+  return out;
+}
+
+/** Runs a numerics call, turning an interrupt into the language's interrupt and numerics errors into argument-level ones. */
+function guarded<T>(fn: string, ctx: BuiltinContext, body: () => T): T {
+  try {
+    return body();
+  } catch (e) {
+    if (e instanceof StopRequested) throw ctx.interrupted();
+    if (e instanceof NumericsError) throw new ArgumentError(`${fn}(): ${e.message.replace(/^[a-zA-Z]+: /, "")}`);
+    throw e;
+  }
+}
+
+function probePoint(a: number, b: number): number {
+  if (Number.isFinite(a) && Number.isFinite(b)) return 0.5 * (a + b);
+  if (Number.isFinite(a)) return a + Math.max(Math.abs(a), 1);
+  if (Number.isFinite(b)) return b - Math.max(Math.abs(b), 1);
+  return 0;
+}
+
+const F_DOC = "a function of one variable, like f(x) = x^2 or f(P) = V(P)";
+
+export const numerics: BuiltinDef[] = [
+  defineBuiltin({
+    name: "integrate",
+    group: "numerics",
+    params: [
+      { name: "f", type: "function", doc: F_DOC },
+      { name: "a", type: "any", doc: "lower bound: a quantity, a number, or -Infinity" },
+      { name: "b", type: "any", doc: "upper bound, same dimension as a; may be Infinity" },
+      { name: "options", type: "record", optional: true, doc: "{rel: 1e-10, abs: 0, maxEval: 50000}" },
+    ],
+    returns: "any",
+    doc: "The integral of f from a to b, in the units of f times those of x. Either bound may be Infinity.",
+    method: "Adaptive 21-point Gauss-Kronrod quadrature with a global error estimate; infinite ranges and end-point singularities by change of variable (lib/numerics/integrate.ts).",
+    source: "QUADPACK (Piessens et al., 1983) rule constants and error estimate",
+    examples: ["integrate(f(x) = x^2, 0, 3)", "integrate(f(V) = 1 / V^2 * 1 m^6, 1 m^3, Infinity)", "integrate(f(P) = 8.314 J/(mol K) * 300 K / P, 1 bar, 10 bar, {rel: 1e-12})"],
+    impl: ({ f, a, b, options }, ctx) => {
+      const axis = axisOf("integrate", [["a", a], ["b", b]], ctx);
+      const lo = axis.si(a, "a");
+      const hi = axis.si(b, "b");
+      const opts = optionsOf("integrate", options, ["rel", "abs", "maxEval"]);
+      const { g, yUnit } = plainFunction("integrate", f, axis, probePoint(lo, hi), ctx);
+      if (isUnit(opts.abs)) opts.abs = (opts.abs as Unit).toSI().toNumber();
+      const r = guarded("integrate", ctx, () => integrate(g, lo, hi, { ...opts, shouldStop: ctx.shouldStop }));
+      return combine(r.value, yUnit, axis.unit, "*", ctx);
+    },
+  }),
+  defineBuiltin({
+    name: "seek",
+    group: "numerics",
+    params: [
+      { name: "f", type: "function", doc: F_DOC },
+      { name: "lo", type: "any", doc: "one end of the bracket (quantity or number)" },
+      { name: "hi", type: "any", doc: "other end, same dimension; f(lo) and f(hi) must differ in sign unless expand is true" },
+      { name: "options", type: "record", optional: true, doc: "{expand: true, rtol: 1e-12, maxIter: 500}" },
+    ],
+    returns: "any",
+    doc: "The x between lo and hi where f(x) = 0, in the unit of lo.",
+    method: "Brent's method (inverse quadratic interpolation with bisection safeguard); optional bracket expansion (lib/numerics/brent.ts).",
+    source: "R. P. Brent, Algorithms for Minimization without Derivatives (1973), ch. 4",
+    examples: ["seek(f(x) = x^2 - 2, 0, 2)", "seek(f(T) = T - 300 K, 250 K, 350 K)", "seek(f(x) = exp(x) - 1e6, 0, 1, {expand: true})"],
+    impl: ({ f, lo, hi, options }, ctx) => {
+      const axis = axisOf("seek", [["lo", lo], ["hi", hi]], ctx);
+      const l = axis.si(lo, "lo");
+      const h = axis.si(hi, "hi");
+      for (const [name, v] of [["lo", l], ["hi", h]] as const) {
+        if (!Number.isFinite(v)) throw new ArgumentError(`argument ${name} of seek() must be finite, got ${v}`);
+      }
+      const opts = optionsOf("seek", options, ["expand", "rtol", "xtol", "maxIter"]);
+      if (isUnit(opts.xtol)) opts.xtol = axis.si(opts.xtol, "options.xtol");
+      const { g } = plainFunction("seek", f, axis, l, ctx);
+      const r = guarded("seek", ctx, () => brent(g, l, h, { ...opts, shouldStop: ctx.shouldStop }, "seek"));
+      if (axis.unit === "") return r.value;
+      return (ctx.units.fromSI(r.value, axis.unit) as Unit).to(axis.shown);
+    },
+  }),
+  defineBuiltin({
+    name: "slope",
+    group: "numerics",
+    params: [
+      { name: "f", type: "function", doc: F_DOC },
+      { name: "x", type: "any", doc: "the point (quantity or number)" },
+      { name: "options", type: "record", optional: true, doc: "{h: step like x, order: 1 or 2}" },
+    ],
+    returns: "any",
+    doc: "The derivative df/dx at x (order 2: the second derivative), in the units of f over those of x.",
+    method: "Central differences with Richardson extrapolation (Ridders), initial step 1% of |x| (lib/numerics/derivative.ts).",
+    source: "C. J. F. Ridders, Adv. Eng. Software 4 (1982) 75",
+    examples: ["slope(f(x) = x^3, 2)", "slope(f(P) = 8.314 J/(mol K) * 300 K / P, 1 bar)"],
+    impl: ({ f, x, options }, ctx) => {
+      const axis = axisOf("slope", [["x", x]], ctx);
+      const x0 = axis.si(x, "x");
+      if (!Number.isFinite(x0)) throw new ArgumentError(`argument x of slope() must be finite, got ${x0}`);
+      const opts = optionsOf("slope", options, ["h", "order"]);
+      if (isUnit(opts.h)) opts.h = axis.si(opts.h, "options.h");
+      const { g, yUnit } = plainFunction("slope", f, axis, x0, ctx);
+      const r = guarded("slope", ctx, () => derivative(g, x0, { ...opts, shouldStop: ctx.shouldStop }));
+      const xUnit = opts.order === 2 && axis.unit !== "" ? `(${axis.unit})^2` : axis.unit;
+      return combine(r.value, yUnit, xUnit, "/", ctx);
+    },
+  }),
+];
