@@ -1,0 +1,93 @@
+import { describe, expect, it } from "vitest";
+import type { Unit } from "mathjs";
+import { createSession } from "../../../../lib/language/index.js";
+import { createSessionWithInternals } from "../../../../lib/language/createSession.js";
+
+const { session, internals } = createSessionWithInternals({ shouldStop: () => false });
+const sink = { stdout() {}, display() {}, clear() {} };
+const value = (code: string): unknown => {
+  const r = session.run(`__v = ${code};`, sink);
+  if (!r.ok) throw new Error(r.error.evalue);
+  return internals.scope.get("__v");
+};
+const si = (code: string, unit: string): number => (value(code) as Unit).toNumber(unit);
+const errorOf = (code: string, shouldStop = () => false) => {
+  const r = createSession({ shouldStop }).run(code, sink);
+  return r.ok ? "" : r.error.evalue;
+};
+const R = 8.314462618; // J/(mol K), CODATA 2018 (exact)
+
+describe("integrate (built-in)", () => {
+  it("integrate(f(x) = x^2, 0, 3) = 9 (antiderivative x^3/3)", () => {
+    expect(value("integrate(f(x) = x^2, 0, 3)")).toBeCloseTo(9, 12);
+  });
+  it("integrate of an ideal-gas V(P) over P gives R T ln(P2/P1) in J/mol (isothermal Gibbs change, textbook)", () => {
+    // f returns m^3/mol, x is Pa: result in J/mol. Closed form: R T ln(10).
+    const g = si(`integrate(f(P) = ${R} J/(mol K) * 300 K / P, 1 bar, 10 bar)`, "J/mol");
+    expect(Math.abs(g / (R * 300 * Math.log(10)) - 1)).toBeLessThan(1e-10);
+  });
+  it("integrate of a J/mol-valued f over Pa has units J/mol*Pa", () => {
+    const v = value("integrate(f(P) = 2 J/mol, 0 Pa, 3 Pa)") as Unit;
+    expect(v.toNumber("J Pa / mol")).toBeCloseTo(6, 12);
+  });
+  it("integrate with an Infinity bound and units: V^-2 from 1 m^3 to Infinity = 1 m^-3 (antiderivative -1/V)", () => {
+    const v = value("integrate(f(V) = 1 / V^2, 1 m^3, Infinity)") as Unit;
+    expect(v.toNumber("m^-3")).toBeCloseTo(1, 12);
+  });
+  it("integrate over R of exp(-x^2) = sqrt(pi) (CRC tables, Gaussian integral) with options {rel: 1e-12}", () => {
+    expect(value("integrate(f(x) = exp(-x^2), -Infinity, Infinity, {rel: 1e-12})")).toBeCloseTo(Math.sqrt(Math.PI), 13);
+  });
+  it("integrate with degC bounds integrates over absolute kelvin (1 J/K over 20..30 degC = 10 J)", () => {
+    expect(si("integrate(f(T) = 1 J/K, 20 degC, 30 degC)", "J")).toBeCloseTo(10, 10);
+  });
+  it("integrate errors name the argument", () => {
+    expect(errorOf("integrate(f(x) = x, 1 m, 2 s)")).toMatch(/argument b of integrate\(\) must have the same dimension as a/);
+    expect(errorOf("integrate(3, 0, 1)")).toMatch(/argument f of integrate\(\)/);
+    expect(errorOf("integrate(f(x) = x, 0, 1, {tol: 1})")).toMatch(/unknown key "tol"/);
+    expect(errorOf("integrate(f(x) = x, 1 m, 2)")).toMatch(/argument b of integrate\(\) needs a quantity/);
+  });
+  it("integrate reports where f is not finite", () => {
+    expect(errorOf("integrate(f(x) = 1/(x - 0.5) * (x > 0.5 ? 0 : 0) + sqrt(0.5 - x), 0, 1)")).toMatch(/integrate\(\).*x = /);
+  });
+  it("integrate stops on interrupt", () => {
+    expect(errorOf("integrate(f(x) = cos(1000 x), 0, 1)", () => true)).toMatch(/interrupt/);
+  });
+});
+
+describe("seek (built-in)", () => {
+  it("seek(f(x) = x^2 - 2, 0, 2) = sqrt(2)", () => {
+    expect(value("seek(f(x) = x^2 - 2, 0, 2)")).toBeCloseTo(Math.SQRT2, 14);
+  });
+  it("seek keeps units: the ideal-gas volume where R T / V = 1 bar at 300 K is R T / P (PV = RT)", () => {
+    const v = si(`seek(f(V) = ${R} J/(mol K) * 300 K / V - 1 bar, 1e-3 m^3/mol, 1 m^3/mol)`, "m^3/mol");
+    expect(Math.abs(v / ((R * 300) / 1e5) - 1)).toBeLessThan(1e-12);
+  });
+  it("seek returns the result in the unit of lo (degC in, degC out)", () => {
+    const t = value("seek(f(T) = T - 300 K, 0 degC, 100 degC)") as Unit;
+    expect(t.formatUnits()).toBe("degC");
+    expect(t.toNumber("K")).toBeCloseTo(300, 10);
+  });
+  it("seek with {expand: true} finds ln(1e6)", () => {
+    expect(value("seek(f(x) = exp(x) - 1e6, 0, 1, {expand: true})")).toBeCloseTo(Math.log(1e6), 12);
+  });
+  it("seek without a sign change says so", () => {
+    expect(errorOf("seek(f(x) = x^2 + 1, -1, 1)")).toMatch(/same sign/);
+  });
+});
+
+describe("slope (built-in)", () => {
+  it("slope(f(x) = x^3, 2) = 12 (calculus)", () => {
+    expect(value("slope(f(x) = x^3, 2)")).toBeCloseTo(12, 9);
+  });
+  it("slope of R T / P at 1 bar is -R T / P^2 in m^3/(mol Pa) (ideal gas, calculus)", () => {
+    const d = si(`slope(f(P) = ${R} J/(mol K) * 300 K / P, 1 bar)`, "m^3/(mol Pa)");
+    expect(Math.abs(d / (-(R * 300) / 1e10) - 1)).toBeLessThan(1e-9);
+  });
+  it("slope with {order: 2} gives the second derivative with units over x^2", () => {
+    const d = si("slope(f(t) = 5 m/s^2 * t^2 / 2, 3 s, {order: 2})", "m/s^2");
+    expect(d).toBeCloseTo(5, 7);
+  });
+  it("slope names a bad x", () => {
+    expect(errorOf('slope(f(x) = x, "a")')).toMatch(/argument x of slope\(\) needs a number or a quantity/);
+  });
+});
