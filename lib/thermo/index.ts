@@ -41,3 +41,7 @@ export { idealGasTotals, referenceState, DEFAULT_REFERENCE, type ReferenceState,
 export { leeKesler, type LeeKeslerModel, type LeeKeslerMixing } from "./eos/leekesler.js";
 export { virial, type VirialModel } from "./eos/virial.js";
 export type { VirialCorrelation } from "./eos/virialCorrelations.js";
+export { enthalpyIntegral, entropyIntegral } from "./idealGas/cp.js";
+export { idealMixingEntropy } from "./idealGas/mixture.js";
+export { idealGasFunctions, type IdealGasClosures } from "./idealGas/functions.js";
+export { lkPseudoCritical } from "./eos/leekesler.js";
