@@ -24,7 +24,7 @@ export const execute_request: Handler = async (ctx) => {
   }
 
   const count = execution.begin(code, storeHistory);
-  if (!silent) await ctx.publish("execute_input", { code, execution_count: count });
+  if (!silent) void ctx.publish("execute_input", { code, execution_count: count });
 
   const payload: Json[] = [];
   let result: RunResult;
@@ -32,24 +32,23 @@ export const execute_request: Handler = async (ctx) => {
   if (help !== undefined) {
     const outcome = await answerHelp(ctx.services.engine, help);
     if (outcome.kind === "page") payload.push({ source: "page", data: outcome.bundle, start: 0 });
-    else await ctx.publish("stream", { name: "stderr", text: `No help for '${outcome.name}': not a known name.\n` });
+    else void ctx.publish("stream", { name: "stderr", text: `No help for '${outcome.name}': not a known name.\n` });
     result = { ok: true };
   } else {
-    // Outputs are published in the order the cell produced them; the reply waits for all of them.
-    const sent: Promise<void>[] = [];
-    result = await ctx.services.engine.execute(code, (o) => sent.push(publishOutput(ctx, o)));
-    await Promise.all(sent);
+    // Publishing enqueues at once on the iopub queue, which keeps the cell's order; not awaiting each
+    // send keeps the round trip short (clients wait for both the reply and idle anyway).
+    result = await ctx.services.engine.execute(code, (o) => void publishOutput(ctx, o));
   }
 
   if (!result.ok) {
     const { ename, evalue, traceback } = result.error;
-    await ctx.publish("error", { ename, evalue, traceback });
+    void ctx.publish("error", { ename, evalue, traceback });
     if (stopOnError) execution.abort.fail();
     await ctx.reply({ status: "error", execution_count: count, ename, evalue, traceback, user_expressions: {}, payload: [] });
     return;
   }
   if (result.result && !silent) {
-    await ctx.publish("execute_result", { execution_count: count, data: result.result, metadata: {} });
+    void ctx.publish("execute_result", { execution_count: count, data: result.result, metadata: {} });
     if (storeHistory) execution.history.setOutput(count, result.result["text/plain"]);
   }
   const userExpressions: Json = {};
