@@ -6,11 +6,13 @@ import type { BuiltinDef } from "./define.js";
 import { ranges } from "./ranges.js";
 import { cell } from "./cell.js";
 import { display } from "./display.js";
+import { numerics } from "./numerics.js";
 
 export const BUILTINS: readonly BuiltinDef[] = [
   ...ranges,
   ...cell,
   ...display,
+  ...numerics,
 ];
 
 export { defineBuiltin, signatureOf, type BuiltinDef, type BuiltinContext, type BuiltinArgs, type ParamSpec, type ParamType } from "./define.js";

@@ -74,14 +74,19 @@ function plainFunction(fn: string, f: unknown, axis: Axis, x0: number, ctx: Buil
   return { g, yUnit };
 }
 
-/** value in unit a*b (op "*") or a/b (op "/"); plain number when both are "". */
-function combine(value: number, a: string, b: string, op: "*" | "/", ctx: BuiltinContext): unknown {
-  if (a === "" && b === "") return value;
-  if (b === "") return ctx.units.fromSI(value, a);
-  const right = ctx.units.fromSI(1, b) as Unit;
-  if (a === "") return op === "*" ? (right.multiply(value) as unknown) : ((ctx.units.fromSI(value, b) as Unit).pow(-1) as Unit).multiply(value * value);
-  const left = ctx.units.fromSI(value, a) as Unit;
-  return op === "*" ? left.multiply(right) : left.divide(right);
+/**
+ * value in the units a*b (op "*") or a/b^power (op "/"); a plain number when both are "" (no unit).
+ * Built with mathjs Unit arithmetic so compound units (J Pa / mol) come out right.
+ */
+function combine(value: number, a: string, b: string, op: "*" | "/", ctx: BuiltinContext, power = 1): unknown {
+  if (b === "") return a === "" ? value : ctx.units.fromSI(value, a);
+  let x = ctx.units.fromSI(1, b) as Unit;
+  // mathjs' typings declare Unit.pow and Unit.multiply for Unit arguments only; at run time they take numbers.
+  const pow = (u: Unit, p: number) => (u.pow as unknown as (p: number) => Unit).call(u, p);
+  if (power !== 1) x = pow(x, power);
+  if (op === "/") x = pow(x, -1);
+  if (a === "") return (x.multiply as unknown as (k: number) => Unit).call(x, value);
+  return (ctx.units.fromSI(value, a) as Unit).multiply(x);
 }
 
 /** Reads an options record of plain numbers (and booleans), naming unknown keys. */
@@ -191,8 +196,7 @@ export const numerics: BuiltinDef[] = [
       if (isUnit(opts.h)) opts.h = axis.si(opts.h, "options.h");
       const { g, yUnit } = plainFunction("slope", f, axis, x0, ctx);
       const r = guarded("slope", ctx, () => derivative(g, x0, { ...opts, shouldStop: ctx.shouldStop }));
-      const xUnit = opts.order === 2 && axis.unit !== "" ? `(${axis.unit})^2` : axis.unit;
-      return combine(r.value, yUnit, xUnit, "/", ctx);
+      return combine(r.value, yUnit, axis.unit, "/", ctx, opts.order === 2 ? 2 : 1);
     },
   }),
 ];
