@@ -16,6 +16,12 @@ export interface CheckRow {
 }
 
 function detailOf(payload: Record<string, unknown>, text: unknown): string {
+  // The row's own one-line message repeats the verdict and label before ": "; keep what follows.
+  if (typeof payload.message === "string" && payload.message.trim()) {
+    const m = payload.message.trim();
+    const at = m.indexOf(`${String(payload.label)}: `);
+    return at >= 0 ? m.slice(at + String(payload.label).length + 2) : m;
+  }
   if (typeof text === "string" && text.trim()) return text.trim().split("\n").join(" ");
   const parts = ["value", "target", "tolerance"].filter((k) => payload[k] !== undefined).map((k) => `${k} ${String(payload[k])}`);
   return parts.join(", ");

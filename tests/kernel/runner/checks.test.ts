@@ -17,6 +17,10 @@ describe("checksIn", () => {
       { label: "T2 below limit", pass: false, detail: "value 160 degC, target 150 degC", cell: 4 },
     ]);
   });
+  it("checksIn keeps the part of the row's message after its label", () => {
+    const rows = checksIn([{ output_type: "display_data", data: { [MIME.check]: { label: "P2 limit", pass: false, message: "FAIL  P2 limit: 60 bar, limit at most 55 bar" } }, metadata: {} }], 2);
+    expect(rows[0]!.detail).toBe("60 bar, limit at most 55 bar");
+  });
   it("checksIn treats anything but pass === true as a failure", () => {
     const rows = checksIn([{ output_type: "display_data", data: { [MIME.check]: { label: "x", pass: "yes" } }, metadata: {} }], 1);
     expect(rows[0]!.pass).toBe(false);

@@ -1,0 +1,151 @@
+/**
+ * The two kernels the runner can drive: a caloric kernel process over ZeroMQ, started and spoken to as
+ * any Jupyter client would (the default), and the in-process engine (--in-process: no sockets, faster,
+ * but a runaway cell can only be stopped cooperatively).
+ */
+import { spawn, type ChildProcess } from "node:child_process";
+import { randomUUID } from "node:crypto";
+import { mkdtempSync, rmSync, writeFileSync } from "node:fs";
+import { createServer } from "node:net";
+import { tmpdir } from "node:os";
+import { join } from "node:path";
+import { fileURLToPath } from "node:url";
+import { InProcessEngine, type EngineOutput, type RunResult } from "../engine/index.js";
+import { kernelInfoContent, IMPLEMENTATION_VERSION } from "../protocol/index.js";
+import { KernelClient, parseConnectionInfo, type ConnectionInfo } from "../wire/index.js";
+import type { ExecuteReply, NotebookKernel } from "./execute.js";
+import type { IopubEvent } from "./outputs.js";
+
+const CLI = fileURLToPath(new URL("../cli.js", import.meta.url));
+
+async function freePort(): Promise<number> {
+  return new Promise((ok, fail) => {
+    const s = createServer()
+      .once("error", fail)
+      .listen(0, "127.0.0.1", () => {
+        const port = (s.address() as { port: number }).port;
+        s.close(() => ok(port));
+      });
+  });
+}
+
+async function loopbackConnection(): Promise<ConnectionInfo> {
+  const ports = new Set<number>();
+  while (ports.size < 5) ports.add(await freePort());
+  const [shell_port, iopub_port, stdin_port, control_port, hb_port] = [...ports] as [number, number, number, number, number];
+  return parseConnectionInfo({ transport: "tcp", ip: "127.0.0.1", shell_port, iopub_port, stdin_port, control_port, hb_port, key: randomUUID(), signature_scheme: "hmac-sha256", kernel_name: "caloric" });
+}
+
+const EXECUTE_TIMEOUT_MS = 24 * 3600 * 1000; // the runner's own --timeout governs cells
+
+export class ProcessKernel implements NotebookKernel {
+  private constructor(
+    private readonly child: ChildProcess,
+    private readonly client: KernelClient,
+    private readonly dir: string,
+    private readonly infoContent: Record<string, unknown>,
+    private readonly stderr: () => string,
+  ) {}
+
+  static async start(): Promise<ProcessKernel> {
+    const info = await loopbackConnection();
+    const dir = mkdtempSync(join(tmpdir(), "caloric-run-"));
+    const file = join(dir, "connection.json");
+    writeFileSync(file, JSON.stringify(info), { mode: 0o600 });
+    const child = spawn(process.execPath, [CLI, "kernel", "-f", file], { stdio: ["ignore", "ignore", "pipe"], env: { ...process.env, JPY_PARENT_PID: String(process.pid) } });
+    let err = "";
+    child.stderr!.on("data", (d: Buffer) => (err = (err + d.toString()).slice(-20_000)));
+    const client = await KernelClient.connect(info);
+    try {
+      const reply = await client.waitForReady(30_000);
+      return new ProcessKernel(child, client, dir, reply.content as Record<string, unknown>, () => err);
+    } catch (e) {
+      client.close();
+      child.kill("SIGKILL");
+      rmSync(dir, { recursive: true, force: true });
+      throw new Error(`the caloric kernel did not start: ${(e as Error).message}\n${err}`);
+    }
+  }
+
+  async info() {
+    return { language_info: this.infoContent.language_info as Record<string, unknown>, implementation_version: String(this.infoContent.implementation_version) };
+  }
+
+  async execute(code: string, onIopub: (ev: IopubEvent) => void): Promise<ExecuteReply> {
+    if (this.child.exitCode !== null || this.child.signalCode !== null) {
+      throw new Error(`the kernel process has exited (${this.child.exitCode ?? this.child.signalCode}):\n${this.stderr()}`);
+    }
+    const { reply, iopub } = await this.client.execute(code, { store_history: true, stop_on_error: true }, EXECUTE_TIMEOUT_MS);
+    for (const m of iopub) onIopub({ msg_type: String(m.header.msg_type), content: m.content as Record<string, unknown> });
+    const c = reply.content as Record<string, unknown>;
+    return { status: c.status as ExecuteReply["status"], execution_count: (c.execution_count as number) ?? null, ename: c.ename as string | undefined, evalue: c.evalue as string | undefined };
+  }
+
+  async interrupt(): Promise<void> {
+    this.client.request("control", "interrupt_request");
+  }
+
+  async close(): Promise<void> {
+    try {
+      const id = this.client.request("control", "shutdown_request", { restart: false });
+      await this.client.collect(id, 3_000).catch(() => undefined);
+    } finally {
+      this.client.close();
+      if (this.child.exitCode === null && this.child.signalCode === null) {
+        const gone = new Promise((r) => this.child.once("exit", r));
+        const timer = setTimeout(() => this.child.kill("SIGKILL"), 3_000);
+        await gone;
+        clearTimeout(timer);
+      }
+      rmSync(this.dir, { recursive: true, force: true });
+    }
+  }
+}
+
+/** Maps engine outputs to the IOPub events a kernel process would send. */
+export function engineOutputEvent(out: EngineOutput): IopubEvent {
+  switch (out.kind) {
+    case "stdout":
+      return { msg_type: "stream", content: { name: "stdout", text: out.text } };
+    case "clear":
+      return { msg_type: "clear_output", content: { wait: out.wait } };
+    case "display":
+      return {
+        msg_type: out.update ? "update_display_data" : "display_data",
+        content: { data: out.bundle, metadata: {}, ...(out.displayId ? { transient: { display_id: out.displayId } } : {}) },
+      };
+  }
+}
+
+export class InProcessKernel implements NotebookKernel {
+  private count = 0;
+  private constructor(private readonly engine: InProcessEngine) {}
+
+  static async start(): Promise<InProcessKernel> {
+    return new InProcessKernel(await InProcessEngine.create());
+  }
+
+  async info() {
+    const content = kernelInfoContent(IMPLEMENTATION_VERSION) as Record<string, unknown>;
+    return { language_info: content.language_info as Record<string, unknown>, implementation_version: IMPLEMENTATION_VERSION };
+  }
+
+  async execute(code: string, onIopub: (ev: IopubEvent) => void): Promise<ExecuteReply> {
+    const n = ++this.count;
+    const result: RunResult = await this.engine.execute(code, (out) => onIopub(engineOutputEvent(out)));
+    if (!result.ok) {
+      onIopub({ msg_type: "error", content: { ...result.error } });
+      return { status: "error", execution_count: n, ename: result.error.ename, evalue: result.error.evalue };
+    }
+    if (result.result) onIopub({ msg_type: "execute_result", content: { data: result.result, metadata: {}, execution_count: n } });
+    return { status: "ok", execution_count: n };
+  }
+
+  async interrupt(): Promise<void> {
+    this.engine.interrupt();
+  }
+
+  async close(): Promise<void> {
+    await this.engine.shutdown();
+  }
+}

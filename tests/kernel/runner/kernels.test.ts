@@ -1,0 +1,29 @@
+import { describe, expect, it } from "vitest";
+import { engineOutputEvent, InProcessKernel } from "../../../kernel/runner/kernels.js";
+import type { IopubEvent } from "../../../kernel/runner/outputs.js";
+
+describe("engineOutputEvent", () => {
+  it("engineOutputEvent maps engine outputs to the IOPub messages of the messaging spec", () => {
+    expect(engineOutputEvent({ kind: "stdout", text: "x" })).toEqual({ msg_type: "stream", content: { name: "stdout", text: "x" } });
+    expect(engineOutputEvent({ kind: "clear", wait: true })).toEqual({ msg_type: "clear_output", content: { wait: true } });
+    expect(engineOutputEvent({ kind: "display", bundle: { "text/plain": "a" }, displayId: "d", update: true })).toEqual({ msg_type: "update_display_data", content: { data: { "text/plain": "a" }, metadata: {}, transient: { display_id: "d" } } });
+    expect(engineOutputEvent({ kind: "display", bundle: { "text/plain": "a" } })).toEqual({ msg_type: "display_data", content: { data: { "text/plain": "a" }, metadata: {} } });
+  });
+});
+
+describe("InProcessKernel", () => {
+  it("InProcessKernel counts executions, keeps variables and reports errors as a kernel would", async () => {
+    const k = await InProcessKernel.start();
+    const events: IopubEvent[] = [];
+    expect(await k.execute("x = 2 bar;", (e) => events.push(e))).toEqual({ status: "ok", execution_count: 1 });
+    const r = await k.execute("x to kPa", (e) => events.push(e));
+    expect(r).toEqual({ status: "ok", execution_count: 2 });
+    const result = events.find((e) => e.msg_type === "execute_result")!;
+    expect(String((result.content.data as Record<string, unknown>)["text/plain"])).toContain("200 kPa");
+    const bad = await k.execute("x + 1 kg", (e) => events.push(e));
+    expect(bad.status).toBe("error");
+    expect(events.at(-1)!.msg_type).toBe("error");
+    expect((await k.info()).language_info.name).toBe("caloric");
+    await k.close();
+  });
+});
