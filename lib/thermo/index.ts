@@ -45,3 +45,7 @@ export { enthalpyIntegral, entropyIntegral } from "./idealGas/cp.js";
 export { idealMixingEntropy } from "./idealGas/mixture.js";
 export { idealGasFunctions, type IdealGasClosures } from "./idealGas/functions.js";
 export { lkPseudoCritical } from "./eos/leekesler.js";
+export {
+  if97State, if97Psat, if97Tsat, toMolar, M_WATER, T_CRIT as WATER_T_CRIT, P_CRIT_MPA as WATER_P_CRIT_MPA,
+  VALIDITY_TEXT as WATER_VALIDITY, type WaterState, type WaterPhase, type IF97Input,
+} from "./water/index.js";
