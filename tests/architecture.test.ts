@@ -14,11 +14,11 @@ const root = resolve(dirname(fileURLToPath(import.meta.url)), "..");
 const UNITS = [
   "lib/numerics", "lib/thermo", "lib/units", "lib/display", "lib/language",
   "kernel/wire", "kernel/protocol", "kernel/handlers", "kernel/execution", "kernel/engine", "kernel/runner",
-  "kernel/main.ts", "kernel/cli.ts",
+  "kernel/main.ts", "kernel/cli.ts", "kernel/install.ts",
 ] as const;
 type Unit = (typeof UNITS)[number];
 
-const KERNEL_ALL: Unit[] = ["kernel/wire", "kernel/protocol", "kernel/handlers", "kernel/execution", "kernel/engine", "kernel/runner", "kernel/main.ts", "kernel/cli.ts"];
+const KERNEL_ALL: Unit[] = ["kernel/wire", "kernel/protocol", "kernel/handlers", "kernel/execution", "kernel/engine", "kernel/runner", "kernel/main.ts", "kernel/cli.ts", "kernel/install.ts"];
 
 /** May import (units and packages). node: built-ins are allowed where `node` is true. */
 const RULES: Record<Unit, { units: Unit[]; packages: string[]; node: boolean }> = {
@@ -33,11 +33,14 @@ const RULES: Record<Unit, { units: Unit[]; packages: string[]; node: boolean }> 
   "kernel/execution": { units: ["kernel/protocol"], packages: [], node: true },
   "kernel/handlers": { units: ["kernel/protocol", "kernel/execution", "kernel/engine"], packages: [], node: true },
   // The engine hosts the language and finishes display bundles (async chart rendering) before sending.
-  "kernel/engine": { units: ["kernel/protocol", "lib/language", "lib/display"], packages: [], node: true },
+  // tsx only under the test runner, where the worker must load TypeScript sources.
+  "kernel/engine": { units: ["kernel/protocol", "lib/language", "lib/display"], packages: ["tsx"], node: true },
   // The runner reads design-check rows by the MIME type defined once in lib/display.
   "kernel/runner": { units: ["kernel/wire", "kernel/protocol", "kernel/engine", "lib/display"], packages: ["marked"], node: true },
   "kernel/main.ts": { units: KERNEL_ALL, packages: [], node: true },
   "kernel/cli.ts": { units: KERNEL_ALL, packages: [], node: true },
+  // `caloric install`: writes the kernelspec; needs only the protocol's names.
+  "kernel/install.ts": { units: ["kernel/protocol"], packages: [], node: true },
 };
 
 function walk(dir: string): string[] {

@@ -3,6 +3,7 @@
  * option; a long cell blocks the thread, so interrupt is cooperative only (the flag the language polls).
  */
 import type { Session, SessionOptions } from "../../lib/language/index.js";
+import { finishBundles } from "./finish.js";
 import type { EngineOutput, Interpreter, RunResult } from "./interpreter.js";
 
 export type SessionFactory = (options: SessionOptions) => Session;
@@ -29,11 +30,15 @@ export class InProcessEngine implements Interpreter {
   async execute(code: string, onOutput: (output: EngineOutput) => void): Promise<RunResult> {
     this.guard();
     this.stopRequested = false;
-    return this.session.run(code, {
-      stdout: (text) => onOutput({ kind: "stdout", text }),
-      display: (bundle, options) => onOutput({ kind: "display", bundle, displayId: options?.displayId, update: options?.update }),
-      clear: (wait) => onOutput({ kind: "clear", wait }),
+    // The session runs synchronously; outputs are finished (chart pictures) and delivered in order after it.
+    const outputs: EngineOutput[] = [];
+    const result = this.session.run(code, {
+      stdout: (text) => outputs.push({ kind: "stdout", text }),
+      display: (bundle, options) => outputs.push({ kind: "display", bundle, displayId: options?.displayId, update: options?.update }),
+      clear: (wait) => outputs.push({ kind: "clear", wait }),
     });
+    for (const output of outputs) onOutput((await finishBundles({ output })).output);
+    return finishBundles(result);
   }
   async evaluate(expression: string): Promise<RunResult> {
     this.guard();

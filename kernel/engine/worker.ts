@@ -5,6 +5,7 @@
 import { parentPort, workerData } from "node:worker_threads";
 import type { CellSink, Session, SessionOptions } from "../../lib/language/index.js";
 import type { FromWorker, ToWorker, WorkerData } from "./protocol.js";
+import { finishBundles } from "./finish.js";
 
 type SessionFactory = (options: SessionOptions) => Session;
 
@@ -12,7 +13,12 @@ if (!parentPort) throw new Error("kernel/engine/worker must run in a worker thre
 const port = parentPort;
 const data = workerData as WorkerData;
 const flag = new Int32Array(data.flag);
-const post = (m: FromWorker) => port.postMessage(m);
+// Chart bundles leave the language without pictures (vega renders asynchronously); every message goes
+// through one chain that adds them, so outputs keep their order and "done" follows the last output.
+let chain: Promise<void> = Promise.resolve();
+const post = (m: FromWorker) => {
+  chain = chain.then(async () => port.postMessage(await finishBundles(m)));
+};
 
 const sessionReady: Promise<Session> = (import(data.sessionModule) as Promise<{ createSession: SessionFactory }>).then((m) =>
   m.createSession({ shouldStop: () => Atomics.load(flag, 0) === 1 }),
