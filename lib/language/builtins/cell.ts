@@ -28,4 +28,16 @@ export const cell: BuiltinDef[] = [
       return undefined;
     },
   }),
+  defineBuiltin({
+    name: "clear",
+    group: "output",
+    params: [{ name: "wait", type: "boolean", optional: true, doc: "true: clear when the next output arrives (no flicker)" }],
+    returns: "none",
+    doc: "Clears this cell's output so far (in a loop of show() calls, clear(true) replaces the previous display).",
+    examples: ["clear(true)"],
+    impl: ({ wait }, ctx) => {
+      ctx.clear(wait === true);
+      return undefined;
+    },
+  }),
 ];

@@ -80,7 +80,10 @@ export interface BuiltinContext {
   /** The error to throw when shouldStop() turned true. */
   interrupted(): Error;
   stdout(text: string): void;
-  display(bundle: MimeBundle): void;
+  /** With displayId, a later call with update=true replaces that display (progressive output). */
+  display(bundle: MimeBundle, options?: { displayId?: string; update?: boolean }): void;
+  /** clear_output: wait=true clears when the next output arrives. */
+  clear(wait: boolean): void;
   /** Rich output of any language value (quantities, records, RichValues ...). */
   bundleOf(value: unknown): MimeBundle;
   /** One-line text of any language value. */

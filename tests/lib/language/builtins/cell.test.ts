@@ -28,3 +28,13 @@ describe("show", () => {
     expect(r.ok && r.result?.["text/plain"]).toBe("2");
   });
 });
+
+describe("clear", () => {
+  it("clear asks the front end to clear the cell's output, now or at the next output", () => {
+    const s = createSession({ shouldStop: () => false });
+    const waits: boolean[] = [];
+    const sink = { stdout() {}, display() {}, clear: (w: boolean) => waits.push(w) };
+    expect(s.run("clear()\nclear(true)", sink)).toEqual({ ok: true });
+    expect(waits).toEqual([false, true]);
+  });
+});
