@@ -7,6 +7,7 @@
  * (region 3 with the density from region3Density). Inside the dome the vapour fraction is
  * x = (h - h') / (h'' - h') (or with s). Validity: the IF97 range in T, with p <= 100 MPa.
  */
+import { brent } from "../../numerics/index.js";
 import { ThermoError } from "../errors.js";
 import { b23Temperature } from "./boundaries.js";
 import { P_13_MPA, P_CRIT_MPA, P_MAX5_MPA, P_MAX_MPA, P_MIN_SAT_MPA, T_13, T_25, T_CRIT, T_MAX, T_MIN } from "./constants.js";
@@ -18,7 +19,6 @@ import { region3, region3Density } from "./region3.js";
 import { region5 } from "./region5.js";
 import { mixture, phaseOf, saturatedPair } from "./regions.js";
 import { if97Tsat } from "./saturation.js";
-import { brentRoot } from "./solve.js";
 
 type Key = "h" | "s";
 type RegionFn = (T: number, p: number) => WaterState;
@@ -102,13 +102,13 @@ function solveGibbsRegion(fn: RegionFn, p: number, y: number, key: Key, lo: numb
       if (Math.abs(dT) < 1e-10 * T) return label(fn(Math.min(hi, Math.max(lo, T)), p));
     }
   }
-  T = brentRoot((t) => fn(t, p)[key] - y, lo, hi, 1e-11 * hi);
+  T = brent((t) => fn(t, p)[key] - y, lo, hi, { xtol: 1e-11 * hi, rtol: 0 }, "IF97 flash").value;
   return label(fn(T, p));
 }
 
 function solveRegion3(p: number, y: number, key: Key, lo: number, hi: number, branch: "liquid" | "vapor"): WaterState {
   const at = (T: number): WaterState => region3(region3Density(p, T, branch), T);
-  const T = brentRoot((t) => at(t)[key] - y, lo, hi, 1e-11 * hi);
+  const T = brent((t) => at(t)[key] - y, lo, hi, { xtol: 1e-11 * hi, rtol: 0 }, "IF97 region 3 flash").value;
   const st = at(T);
   return label({ ...st, p, phase: T < T_CRIT ? branch : st.phase });
 }

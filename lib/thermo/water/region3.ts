@@ -9,10 +9,10 @@
  * must be named; above it the root is unique. This replaces the 2014 supplementary v(p,T) backward
  * equations (IAPWS SR5-05(2016)), which are not implemented here.
  */
+import { brent } from "../../numerics/index.js";
 import { ThermoError } from "../errors.js";
 import { R_KJ, RHO_CRIT, T_CRIT } from "./constants.js";
 import { fromHelmholtz, type WaterState } from "./properties.js";
-import { brentRoot } from "./solve.js";
 import { seriesWithDerivatives } from "./series.js";
 import { REGION3_HELMHOLTZ, REGION3_N1 } from "./tables/region3Coefficients.js";
 
@@ -65,7 +65,7 @@ export function region3Density(p: number, T: number, branch: "liquid" | "vapor")
     for (let k = 1; k <= steps; k++) {
       const lo = RHO_HI - k * dr;
       const flo = f(lo);
-      if (fhi >= 0 && flo <= 0) return brentRoot(f, lo, hi, hi * 1e-12);
+      if (fhi >= 0 && flo <= 0) return brent(f, lo, hi, { xtol: hi * 1e-12, rtol: 0 }, "IF97 region 3 density").value;
       hi = lo;
       fhi = flo;
     }
@@ -75,7 +75,7 @@ export function region3Density(p: number, T: number, branch: "liquid" | "vapor")
     for (let k = 1; k <= steps; k++) {
       const hi = RHO_LO + k * dr;
       const fhi = f(hi);
-      if (flo <= 0 && fhi >= 0) return brentRoot(f, lo, hi, hi * 1e-12);
+      if (flo <= 0 && fhi >= 0) return brent(f, lo, hi, { xtol: hi * 1e-12, rtol: 0 }, "IF97 region 3 density").value;
       lo = hi;
       flo = fhi;
     }
