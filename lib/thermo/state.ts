@@ -89,6 +89,15 @@ function get(s: ThermoState, k: Prop): number {
 
 function solve(f: (v: number) => number, lo: number, hi: number, what: string): number {
   try {
+    // Grow the bracket from lo in doubling steps: far ends (thousands of kelvin) can lie where an
+    // ideal-gas Cp polynomial has turned negative, so H(T) there is meaningless; take the first sign change.
+    const f0 = f(lo);
+    let a = lo;
+    for (let step = (hi - lo) / 1024; a < hi && f0 !== 0; step *= 2) {
+      const b = Math.min(hi, a + step);
+      if (Math.sign(f(b)) !== Math.sign(f0)) return brent(f, a, b, { xtol: 1e-12 * Math.abs(hi), rtol: 1e-13 }).value;
+      a = b;
+    }
     return brent(f, lo, hi, { xtol: 1e-12 * Math.abs(hi), rtol: 1e-13 }).value;
   } catch (e) {
     throw new ThermoError(what, `no state found with ${what} in [${lo}, ${hi}]: ${(e as Error).message}`);
