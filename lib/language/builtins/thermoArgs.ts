@@ -1,0 +1,95 @@
+/**
+ * Argument plumbing shared by the thermodynamics built-ins: thermo errors turned into errors that
+ * name the user's argument and function, fluids from names / substances / mixtures, quantities or
+ * arrays of quantities to SI numbers (once per array), and the broadcast loop of vectorised calls.
+ */
+import { ThermoError, type Fluid } from "../../thermo/index.js";
+import { isQuantityColumn } from "../values/column.js";
+import { thermoDataOf } from "../values/thermo.js";
+import { ArgumentError } from "./bind.js";
+import type { BuiltinContext } from "./define.js";
+
+/** Runs f; a ThermoError becomes an ArgumentError "argument X of fn(): ..." (the session adds the caret). */
+export function guard<T>(fn: string, f: () => T, rename: Record<string, string> = {}): T {
+  try {
+    return f();
+  } catch (e) {
+    if (e instanceof ThermoError) {
+      const arg = rename[e.argument] ?? e.argument;
+      throw new ArgumentError(`argument ${arg} of ${fn}(): ${e.message}`);
+    }
+    throw e;
+  }
+}
+
+const isUnitLike = (x: unknown) => typeof x === "object" && x !== null && (x as { isUnit?: boolean }).isUnit === true;
+const isMatrixLike = (x: unknown): x is { toArray(): unknown[] } =>
+  typeof x === "object" && x !== null && (x as { isMatrix?: boolean }).isMatrix === true;
+
+/** True for arrays, matrices and columns (a vectorised argument). */
+export function isVectorArg(x: unknown): boolean {
+  return Array.isArray(x) || isMatrixLike(x);
+}
+
+/** One quantity -> SI number, or an array/column of them -> Float64Array (columns read without copying). */
+export function siArg(value: unknown, dim: string, name: string, fn: string, ctx: BuiltinContext): number | Float64Array {
+  if (value === undefined) throw new ArgumentError(`${fn}() is missing argument ${name} (${dim.replace(/_/g, " ")})`);
+  if (isQuantityColumn(value)) {
+    const si = ctx.units.siUnitOf(dim);
+    if (value.siUnit === si) return value.si;
+  }
+  if (isVectorArg(value)) {
+    const items = (isMatrixLike(value) ? value.toArray() : (value as unknown[])).flat(Infinity);
+    return Float64Array.from(items, (v, i) => ctx.units.toSI(v, dim, `${name}[${i + 1}]`, fn));
+  }
+  if (!isUnitLike(value) && typeof value !== "number") {
+    throw new ArgumentError(`argument ${name} of ${fn}() needs ${dim.replace(/_/g, " ")} quantity, got ${ctx.textOf(value)}`);
+  }
+  return ctx.units.toSI(value, dim, name, fn);
+}
+
+/** Common length of the array inputs (undefined when all are scalars); mismatches are errors. */
+export function lengthOf(fn: string, inputs: Record<string, number | Float64Array>): number | undefined {
+  let n: number | undefined;
+  let first = "";
+  for (const [k, v] of Object.entries(inputs)) {
+    if (typeof v === "number") continue;
+    if (n === undefined) [n, first] = [v.length, k];
+    else if (v.length !== n) throw new ArgumentError(`${fn}(): array arguments must have the same length; ${first} has ${n}, ${k} has ${v.length}`);
+  }
+  return n;
+}
+
+/** Element i of every input (scalars repeat), into `into`. */
+export function pick(inputs: Record<string, number | Float64Array>, i: number, into: Record<string, number>): Record<string, number> {
+  for (const k in inputs) {
+    const v = inputs[k]!;
+    into[k] = typeof v === "number" ? v : v[i]!;
+  }
+  return into;
+}
+
+/** Requires an absolute temperature or pressure above zero, naming the argument. */
+export function requireAbove0(fn: string, name: string, value: number, unit: "K" | "Pa" | "m^3/mol"): void {
+  if (!(value > 0) || !Number.isFinite(value)) {
+    const what = unit === "K" ? "0 K (absolute temperature)" : unit === "Pa" ? "0 Pa (absolute pressure)" : "0 m^3/mol";
+    throw new ArgumentError(`argument ${name} of ${fn}() must be above ${what}, got ${value} ${unit}`);
+  }
+}
+
+/** The same check over a vector input: reports the first bad element with its 1-based index. */
+export function requireAllAbove0(fn: string, name: string, v: number | Float64Array, unit: "K" | "Pa" | "m^3/mol"): void {
+  if (typeof v === "number") return requireAbove0(fn, name, v, unit);
+  for (let i = 0; i < v.length; i++) if (!(v[i]! > 0) || !Number.isFinite(v[i]!)) requireAbove0(fn, `${name}[${i + 1}]`, v[i]!, unit);
+}
+
+/** A Fluid from what a model call accepts; `resolve` turns a name or record into a substance value's data. */
+export function fluidOf(x: unknown, fn: string, ctx: BuiltinContext, resolve: (x: unknown) => unknown): Fluid {
+  const value = typeof x === "string" || (typeof x === "object" && x !== null && thermoDataOf(x) === undefined && !isVectorArg(x) && !isUnitLike(x))
+    ? resolve(x)
+    : x;
+  const d = thermoDataOf(value);
+  if (d?.kind === "substance") return { components: [d.substance], x: [1] };
+  if (d?.kind === "mixture") return { components: d.components, x: d.x, ...(d.kij ? { kij: d.kij } : {}) };
+  throw new ArgumentError(`argument x of ${fn}() needs a substance name like "methane", a substance(...) or a mixture(...), got ${ctx.textOf(x)}`);
+}

@@ -1,0 +1,195 @@
+/**
+ * Thermodynamics built-ins, part 2: state(), departure() and change().
+ * state() takes T and P (scalars, or arrays/spans for a whole curve at the cost of plain-number
+ * loops) or a record of any two properties; if97() models route to IAPWS-IF97.
+ */
+import { departure as thermoDeparture, maxwellResidual, stateFrom, type Spec } from "../../thermo/index.js";
+import { modelDataOf, type ModelData } from "../values/thermo.js";
+import { ArgumentError } from "./bind.js";
+import { defineBuiltin, type BuiltinContext, type BuiltinDef } from "./define.js";
+import { guard, isVectorArg, lengthOf, pick, requireAllAbove0, siArg } from "./thermoArgs.js";
+import { STATE_FIELDS, columnsOf, eosRowAt, identity, recordOf, rowOf } from "./thermoRows.js";
+import { waterAt, waterFromSpec, type Row } from "./water.js";
+
+const PHASES = ["stable", "liquid", "vapor", "vapour"];
+const SPEC_DIMS: Record<string, string> = {
+  T: "temperature", P: "pressure", V: "molar_volume", v: "specific_volume", rho: "density",
+  H: "molar_energy", h: "specific_energy", S: "molar_entropy", s: "specific_entropy",
+  U: "molar_energy", u: "specific_energy", x: "dimensionless",
+};
+
+const isPlainRecord = (x: unknown): x is Record<string, unknown> =>
+  typeof x === "object" && x !== null && Object.getPrototypeOf(x) === Object.prototype && modelDataOf(x) === undefined;
+
+function dataOf(m: unknown): ModelData {
+  return modelDataOf(m)!; // the registry has checked kind "model"
+}
+
+/** Runs `point` once per element of the (broadcast) inputs; scalars give a record, arrays columns. */
+function evaluate(d: ModelData, inputs: Record<string, number | Float64Array>, point: (a: Record<string, number>) => Row, fn: string, ctx: BuiltinContext) {
+  const n = lengthOf(fn, inputs);
+  const args: Record<string, number> = {};
+  if (n === undefined) return recordOf(point(pick(inputs, 0, args)), d, ctx);
+  const rows = new Array<Row>(n);
+  for (let i = 0; i < n; i++) {
+    if ((i & 255) === 0 && ctx.shouldStop()) throw ctx.interrupted();
+    rows[i] = point(pick(inputs, i, args));
+  }
+  return columnsOf(rows, d, ctx);
+}
+
+/** A two-property spec in SI: molar keys for equations of state (v, rho, h, s, u via M). */
+function specOf(d: ModelData, raw: Record<string, number>, fn: string): Spec {
+  const spec: Spec = {};
+  const set = (k: keyof Spec, v: number, from: string) => {
+    if (spec[k] !== undefined) throw new ArgumentError(`argument spec of ${fn}(): ${from} and ${k} give the same property twice; give two different properties`);
+    spec[k] = v;
+  };
+  for (const [k, v] of Object.entries(raw)) {
+    if (k === "v") set("V", v * d.M, k);
+    else if (k === "rho") set("V", d.M / v, k);
+    else if (k === "h" || k === "s" || k === "u") set(k.toUpperCase() as "H", v * d.M, k);
+    else if (k === "x") throw new ArgumentError(`argument spec of ${fn}(): x (vapour fraction) is accepted by if97() only; for ${d.id}() give two of T, P, V, H, S, U`);
+    else set(k as keyof Spec, v, k);
+  }
+  if ((spec.H !== undefined || spec.S !== undefined || spec.U !== undefined) && !d.idealGas) {
+    throw new ArgumentError(`argument spec of ${fn}(): H, S and U need ideal-gas totals, and ${d.noTotals}`);
+  }
+  return spec;
+}
+
+function stateFromRecord(d: ModelData, record: Record<string, unknown>, ctx: BuiltinContext) {
+  const fn = "state";
+  const keys = Object.keys(record);
+  for (const k of keys) {
+    if (!SPEC_DIMS[k]) throw new ArgumentError(`argument spec of state(): unknown property "${k}"; give two of T, P, V (or v, rho), H (or h), S (or s), U (or u)`);
+  }
+  if (keys.length !== 2) throw new ArgumentError(`argument spec of state() needs exactly two properties, like {P: 10 bar, H: 5 kJ/mol}; got ${keys.length}: {${keys.join(", ")}}`);
+  const inputs: Record<string, number | Float64Array> = {};
+  for (const k of keys) inputs[k] = siArg(record[k], SPEC_DIMS[k]!, k, fn, ctx);
+  for (const k of ["T", "P", "V", "v", "rho"]) if (inputs[k] !== undefined) requireAllAbove0(fn, k, inputs[k]!, k === "T" ? "K" : k === "P" ? "Pa" : "m^3/mol");
+  const point = d.id === "if97"
+    ? (a: Record<string, number>) => waterFromSpec({ ...a }, fn)
+    : (a: Record<string, number>) => rowOf(d, guard(fn, () => stateFrom(d.eos!, specOf(d, a, fn), { idealGas: d.idealGas }), { spec: "spec" }), fn);
+  return evaluate(d, inputs, point, fn, ctx);
+}
+
+const DEPARTURE_FIELDS = {
+  T: "temperature", P: "pressure", V: "molar_volume", Z: "dimensionless",
+  HR: "molar_energy", SR: "molar_entropy", UR: "molar_energy", GR: "molar_energy", AR: "molar_energy",
+  lnphi: "dimensionless", phi: "dimensionless", AR_error: "molar_energy", SR_error: "molar_entropy", evaluations: "dimensionless",
+} as const;
+
+const CHANGE = { T: "temperature", P: "pressure", V: "molar_volume", H: "molar_energy", S: "molar_entropy", U: "molar_energy", G: "molar_energy", A: "molar_energy" } as const;
+
+export const thermoState: BuiltinDef[] = [
+  defineBuiltin({
+    name: "state",
+    group: "thermo",
+    params: [
+      { name: "m", type: "model", doc: 'a model: pr("propane"), if97(), ...' },
+      { name: "T", type: "any", doc: "temperature (or a span of them), or a record of two properties like {P: 10 bar, H: 5 kJ/mol}" },
+      { name: "P", type: "any", optional: true, doc: "pressure (or a span of them)" },
+      { name: "phase", type: "string", optional: true, choices: PHASES, doc: '"stable" (default, lowest Gibbs energy), "liquid" or "vapor" root' },
+    ],
+    returns: "record",
+    doc: "The state of a fluid: T, P, phase, V, v, rho, Z, totals H, S, U, G, A (molar, vs the stated reference) and h, s, u, g, a (per mass), departures HR, SR, UR, GR, AR, phi, lnphi, f (fugacity), Cp, Cv, cp, cv, w (speed of sound), x (vapour fraction) when two-phase, the model, reference and cautions. Read fields as s.H, s.Z ...; spans give columns.",
+    method: "Equation of state: volume root chosen by lowest Gibbs energy (or as asked), closed-form departures, ideal-gas Cp integrals; Cp, Cv and w from P-V-T derivatives. Two-property specs solved by Brent's method on the model (two-phase by the lever rule below Tc). if97(): IAPWS-IF97 regions and backward equations.",
+    source: "lib/thermo (models, departures, IF97); each model's display names its published source",
+    examples: ['state(pr("propane"), 350 K, 10 bar)', 'state(pr("propane"), 300 K, 20 bar, "liquid").rho', 'state(srk("methane"), span(200 K, 300 K, 3), 50 bar).Z', 'state(pr("propane"), {P: 10 bar, H: 15 kJ/mol}).T', "state(if97(), {P: 10 bar, x: 0.5}).h"],
+    impl: ({ m, T, P, phase }, ctx) => {
+      const d = dataOf(m);
+      const ph = phase === "vapour" ? "vapor" : (phase as string | undefined);
+      if (isPlainRecord(T)) {
+        if (P !== undefined || phase !== undefined) throw new ArgumentError("state(m, {..}) takes the two properties in one record; remove the arguments after it");
+        return stateFromRecord(d, T, ctx);
+      }
+      if (P === undefined) throw new ArgumentError("state() is missing argument P (pressure); use state(m, T, P) or state(m, {two properties})");
+      const inputs = { T: siArg(T, "temperature", "T", "state", ctx), P: siArg(P, "pressure", "P", "state", ctx) };
+      requireAllAbove0("state", "T", inputs.T, "K");
+      requireAllAbove0("state", "P", inputs.P, "Pa");
+      const point = d.id === "if97"
+        ? (a: Record<string, number>) => waterAt(a.T!, a.P!, "state", ph)
+        : (a: Record<string, number>) => eosRowAt(d, a.T!, a.P!, ph, "state");
+      return evaluate(d, inputs, point, "state", ctx);
+    },
+  }),
+  defineBuiltin({
+    name: "departure",
+    group: "thermo",
+    params: [
+      { name: "m", type: "model", doc: "an equation-of-state model" },
+      { name: "T", type: "quantity", dim: "temperature", doc: "temperature" },
+      { name: "P", type: "quantity", dim: "pressure", doc: "pressure" },
+      { name: "options", type: "record", optional: true, doc: '{route: "closed" | "integrate", phase: "stable" | "liquid" | "vapor", rel: 1e-10}' },
+    ],
+    returns: "record",
+    fields: DEPARTURE_FIELDS,
+    doc: "Departure (residual) functions at T, P: HR, SR, UR, GR, AR, lnphi, phi, Z, V. route \"integrate\" computes them by integrating the Maxwell relation from V = infinity using only P(T, V), and reports its quadrature error estimates, so you can see it agree with the closed form.",
+    method: "closed: the model's closed forms. integrate: A^R and S^R as integrals over density of the residual pressure and its T-derivative (adaptive Gauss-Kronrod), then H^R, U^R, G^R, ln phi.",
+    source: "lib/thermo/departure (closed forms per model; numerical Maxwell route)",
+    examples: ['departure(pr("propane"), 350 K, 10 bar)', 'departure(pr("propane"), 350 K, 10 bar, {route: "integrate"}).HR'],
+    vectorize: true,
+    impl: ({ m, T, P, options }, ctx) => {
+      const d = dataOf(m);
+      if (d.id === "if97") throw new ArgumentError('argument m of departure(): if97() gives total properties (state()), not departure functions; use an equation-of-state model such as pr("water")');
+      const o = (options ?? {}) as Record<string, unknown>;
+      for (const k of Object.keys(o)) if (!["route", "phase", "rel"].includes(k)) throw new ArgumentError(`option "${k}" of departure() is not known; valid options: route, phase, rel`);
+      const route = o.route ?? "closed";
+      if (route !== "closed" && route !== "integrate") throw new ArgumentError(`option route of departure() must be "closed" or "integrate", got ${ctx.textOf(route)}`);
+      const phase = o.phase === "vapour" ? "vapor" : (o.phase ?? "stable") as "stable";
+      const rel = o.rel === undefined ? undefined : ctx.units.toSI(o.rel, "dimensionless", "rel", "departure");
+      requireAllAbove0("departure", "T", T, "K");
+      requireAllAbove0("departure", "P", P, "Pa");
+      const closed = guard("departure", () => thermoDeparture(d.eos!, T, P, { phase, route: "closed" }));
+      const base = { T, P, V: closed.V, phase: closed.phase, route };
+      if (route === "closed") {
+        const { Z, HR, SR, UR, GR, AR, lnphi } = closed;
+        return { ...base, Z, HR, SR, UR, GR, AR, lnphi, phi: Math.exp(lnphi) };
+      }
+      const r = guard("departure", () => maxwellResidual(d.eos!, T, closed.V, { rel, shouldStop: ctx.shouldStop }));
+      return {
+        ...base, Z: r.Z, HR: r.HR, SR: r.SR, UR: r.UR, GR: r.GR, AR: r.AR, lnphi: r.lnphi, phi: Math.exp(r.lnphi),
+        AR_error: r.errors.AR, SR_error: r.errors.SR, evaluations: r.evaluations,
+      };
+    },
+  }),
+  defineBuiltin({
+    name: "change",
+    group: "thermo",
+    params: [
+      { name: "s1", type: "record", doc: "the first state (from state())" },
+      { name: "s2", type: "record", doc: "the second state, same model, fluid and reference" },
+    ],
+    returns: "record",
+    doc: "Property changes from s1 to s2: dT, dP, dV, dH, dS, dU, dG, dA (molar). Both states must come from the same model, fluid and reference state; spans give columns.",
+    method: "Differences of the state records' values (s2 - s1); the reference state cancels.",
+    examples: ['m = pr("propane"); change(state(m, 300 K, 1 bar), state(m, 400 K, 10 bar)).dH'],
+    impl: ({ s1, s2 }, ctx) => {
+      for (const [name, s] of [["s1", s1], ["s2", s2]] as const) {
+        if (typeof s.model !== "string" || s.T === undefined || s.P === undefined) {
+          throw new ArgumentError(`argument ${name} of change() needs a state record from state(), got ${ctx.textOf(s)}`);
+        }
+      }
+      if (s1.model !== s2.model) throw new ArgumentError(`argument s2 of change(): the states come from different models or fluids: "${s1.model}" and "${s2.model}"`);
+      if (s1.reference !== s2.reference) throw new ArgumentError(`argument s2 of change(): the states have different reference states: "${s1.reference}" and "${s2.reference}"`);
+      const out: Record<string, unknown> = {};
+      for (const [k, dim] of Object.entries(CHANGE)) {
+        if (s1[k] === undefined || s2[k] === undefined) continue;
+        const a = siArg(s1[k], dim, `s1.${k}`, "change", ctx);
+        const b = siArg(s2[k], dim, `s2.${k}`, "change", ctx);
+        const n = lengthOf("change", { s1: a, s2: b });
+        if (n === undefined) out[`d${k}`] = ctx.units.fromSI((b as number) - (a as number), dim);
+        else {
+          const diff = new Float64Array(n);
+          for (let i = 0; i < n; i++) diff[i] = (typeof b === "number" ? b : b[i]!) - (typeof a === "number" ? a : a[i]!);
+          out[`d${k}`] = ctx.column(diff, dim);
+        }
+      }
+      out.model = s1.model;
+      return out;
+    },
+  }),
+];
+
+export { STATE_FIELDS, identity, isVectorArg };
