@@ -7,12 +7,16 @@ import { ranges } from "./ranges.js";
 import { cell } from "./cell.js";
 import { display } from "./display.js";
 import { numerics } from "./numerics.js";
+import { thermo } from "./thermo.js";
+import { water } from "./water.js";
 
 export const BUILTINS: readonly BuiltinDef[] = [
   ...ranges,
   ...cell,
   ...display,
   ...numerics,
+  ...thermo,
+  ...water,
 ];
 
 export { defineBuiltin, signatureOf, type BuiltinDef, type BuiltinContext, type BuiltinArgs, type ParamSpec, type ParamType } from "./define.js";
