@@ -9,6 +9,7 @@ import { display } from "./display.js";
 import { numerics } from "./numerics.js";
 import { thermo } from "./thermo.js";
 import { water } from "./water.js";
+import { charts } from "./charts.js";
 
 export const BUILTINS: readonly BuiltinDef[] = [
   ...ranges,
@@ -17,6 +18,7 @@ export const BUILTINS: readonly BuiltinDef[] = [
   ...numerics,
   ...thermo,
   ...water,
+  ...charts,
 ];
 
 export { defineBuiltin, signatureOf, type BuiltinDef, type BuiltinContext, type BuiltinArgs, type ParamSpec, type ParamType } from "./define.js";
