@@ -1,0 +1,148 @@
+import { describe, expect, it } from "vitest";
+import type { Unit } from "mathjs";
+import { createSessionWithInternals } from "../../../../lib/language/createSession.js";
+import { isQuantityColumn } from "../../../../lib/language/values/column.js";
+import { getSubstance, pr as prModel, pureFluid, state as thermoState, departure as thermoDeparture } from "../../../../lib/thermo/index.js";
+
+const { session, internals } = createSessionWithInternals({ shouldStop: () => false });
+const sink = { stdout() {}, display() {}, clear() {} };
+const value = (code: string): unknown => {
+  const r = session.run(`__v = ${code};`, sink);
+  if (!r.ok) throw new Error(r.error.evalue);
+  return internals.scope.get("__v");
+};
+const num = (code: string, unit: string): number => (value(code) as Unit).toNumber(unit);
+const errorOf = (code: string): string => {
+  const r = session.run(code, sink);
+  return r.ok ? "" : r.error.evalue;
+};
+const rel = (a: number, b: number) => Math.abs(a / b - 1);
+session.run('m = pr("propane"); b = pr("n-butane"); s = state(m, 350 K, 10 bar);', sink);
+
+describe("state", () => {
+  it("state(pr(...)) equals the thermo library's state at the same T, P (same equations, 1e-12 relative)", () => {
+    const lib = thermoState(prModel(pureFluid(getSubstance("propane"))), 350, 1e6);
+    expect(rel(num("s.V", "m^3/mol"), lib.V)).toBeLessThan(1e-12);
+    expect(rel(num("s.HR", "J/mol"), lib.HR)).toBeLessThan(1e-12);
+    expect(rel(num("s.SR", "J/(mol K)"), lib.SR)).toBeLessThan(1e-12);
+    expect(rel(value("s.Z") as number, lib.Z)).toBeLessThan(1e-12);
+  });
+
+  it("state: n-butane saturated volumes at 350 K, 9.4573 bar by PR: V_vap 2486.1, V_liq 112.6 cm^3/mol (Smith, Van Ness & Abbott 7th ed. Example 3.9, from memory; 0.1 %)", () => {
+    expect(rel(num('state(b, 350 K, 9.4573 bar, "vapor").V', "cm^3/mol"), 2486.1)).toBeLessThan(1e-3);
+    expect(rel(num('state(b, 350 K, 9.4573 bar, "liquid").V', "cm^3/mol"), 112.6)).toBeLessThan(1e-3);
+  });
+
+  it("state: Lee-Kesler Z of n-butane at 510 K, 25 bar is 0.873 and the Pitzer/Abbott virial gives 0.879 (SVNA 7th ed. Example 3.10, from memory; 0.5 %)", () => {
+    expect(rel(value('state(lk("n-butane"), 510 K, 25 bar).Z') as number, 0.873)).toBeLessThan(5e-3);
+    expect(rel(value('state(virial("n-butane"), 510 K, 25 bar).Z') as number, 0.879)).toBeLessThan(5e-3);
+  });
+
+  it("state: totals obey H = U + PV, G = H - TS, A = U - TS and specific = molar / M (definitions, 1e-12)", () => {
+    const T = 350, P = 1e6, M = 0.044097;
+    const [H, S, U, G, A, V] = [num("s.H", "J/mol"), num("s.S", "J/(mol K)"), num("s.U", "J/mol"), num("s.G", "J/mol"), num("s.A", "J/mol"), num("s.V", "m^3/mol")];
+    expect(Math.abs(H - (U + P * V))).toBeLessThan(1e-9 * Math.abs(H) + 1e-9);
+    expect(Math.abs(G - (H - T * S))).toBeLessThan(1e-9);
+    expect(Math.abs(A - (U - T * S))).toBeLessThan(1e-9);
+    expect(rel(num("s.h", "J/kg"), H / M)).toBeLessThan(1e-12);
+    expect(rel(num("s.rho", "kg/m^3"), M / V)).toBeLessThan(1e-12);
+    expect(rel(num("s.f", "Pa"), P * (value("s.phi") as number))).toBeLessThan(1e-12);
+  });
+
+  it("state: two-property specs round-trip to the T, P state (Brent on the model, 1e-7 relative)", () => {
+    for (const spec of ["{P: s.P, H: s.H}", "{P: s.P, S: s.S}", "{T: s.T, V: s.V}", "{P: s.P, h: s.h}", "{T: s.T, rho: s.rho}", "{P: s.P, U: s.U}"]) {
+      expect(rel(num(`state(m, ${spec}).T`, "K"), 350)).toBeLessThan(1e-7);
+      expect(rel(num(`state(m, ${spec}).P`, "Pa"), 1e6)).toBeLessThan(1e-7);
+    }
+  });
+
+  it("state: {P, H} between the saturated liquid and vapour gives a two-phase state whose x follows the lever rule", () => {
+    session.run('L = state(m, 300 K, psat(m, 300 K), "liquid"); G = state(m, 300 K, psat(m, 300 K), "vapor"); mid = state(m, {P: psat(m, 300 K), H: 0.25 * L.H + 0.75 * G.H});', sink);
+    expect(value("mid.phase")).toBe("two-phase");
+    expect(Math.abs((value("mid.x") as number) - 0.75)).toBeLessThan(1e-6);
+    expect(Number.isNaN(value("mid.Cp") as number)).toBe(true);
+  });
+
+  it("state over a span returns columns equal to scalar calls (element by element, exact)", () => {
+    const c = value("state(m, span(300 K, 400 K, 11), 10 bar)") as Record<string, unknown>;
+    const Hcol = c.H;
+    if (!isQuantityColumn(Hcol)) throw new Error("H is not a column");
+    expect(Hcol.si.length).toBe(11);
+    for (const i of [0, 3, 10]) {
+      const T = 300 + 10 * i;
+      expect(Hcol.si[i]).toBe(num(`state(m, ${T} K, 10 bar).H`, "J/mol"));
+      expect((c.phase as string[])[i]).toBe(value(`state(m, ${T} K, 10 bar).phase`));
+    }
+    expect(String(c.notes ?? "")).not.toMatch(/NaN/);
+  });
+
+  it("state: the isothermal Gibbs change equals the integral of V dP (dG = int V dP at constant T; quadrature 1e-8)", () => {
+    const dG = num("change(state(m, 300 K, 1 bar), state(m, 300 K, 5 bar)).dG", "J/mol");
+    const integral = num("integrate(f(P) = volume(m, 300 K, P), 1 bar, 5 bar)", "J/mol");
+    expect(rel(dG, integral)).toBeLessThan(1e-8);
+  });
+
+  it("state errors name the argument and the valid range", () => {
+    expect(errorOf("state(m, -5 K, 1 bar)")).toMatch(/argument T of state\(\) must be above 0 K/);
+    expect(errorOf("state(m, 300 K, 0 bar)")).toMatch(/argument P of state\(\) must be above 0 Pa/);
+    expect(errorOf('state(m, 400 K, 10 bar, "liquid")')).toMatch(/liquid root asked of a supercritical fluid at T = 400 K > Tc = 369\.8 K/);
+    expect(errorOf("state(m, 300 K, 1 kg)")).toMatch(/argument P of state\(\)/);
+    expect(errorOf("state(m, {P: 1 bar})")).toMatch(/exactly two properties/);
+    expect(errorOf("state(m, {P: 1 bar, Q: 2})")).toMatch(/unknown property "Q"/);
+    expect(errorOf("state(m, {V: 1 L/mol, rho: 2 kg/L})")).toMatch(/same property twice/);
+    expect(errorOf("state(m, 300 K)")).toMatch(/missing argument P/);
+    expect(errorOf('state("propane", 300 K, 1 bar)')).toMatch(/argument m of state\(\) needs/);
+  });
+});
+
+describe("departure", () => {
+  it("departure closed form and integrate route agree to 1e-8 relative (DESIGN.md section 5; thermo numerical route)", () => {
+    for (const [T, P, ph] of [["350 K", "10 bar", "stable"], ["300 K", "20 bar", "liquid"], ["450 K", "60 bar", "stable"]]) {
+      const o = `{phase: "${ph}"}`;
+      const oi = `{phase: "${ph}", route: "integrate"}`;
+      for (const k of ["HR", "SR", "GR"]) {
+        const unit = k === "SR" ? "J/(mol K)" : "J/mol";
+        const a = num(`departure(m, ${T}, ${P}, ${o}).${k}`, unit);
+        const b = num(`departure(m, ${T}, ${P}, ${oi}).${k}`, unit);
+        expect(Math.abs(a - b)).toBeLessThan(1e-8 * Math.abs(a) + 1e-9);
+      }
+    }
+    expect(num('departure(m, 350 K, 10 bar, {route: "integrate"}).AR_error', "J/mol")).toBeLessThan(1e-6);
+  });
+
+  it("departure equals the thermo library's closed form", () => {
+    const lib = thermoDeparture(prModel(pureFluid(getSubstance("propane"))), 350, 1e6);
+    expect(rel(num("departure(m, 350 K, 10 bar).HR", "J/mol"), lib.HR)).toBeLessThan(1e-12);
+    expect(rel(value("departure(m, 350 K, 10 bar).lnphi") as number, lib.lnphi)).toBeLessThan(1e-12);
+  });
+
+  it("departure vectorises over a span and rejects if97() and unknown options", () => {
+    const c = value("departure(m, span(300 K, 400 K, 3), 1 bar)") as Record<string, unknown>;
+    expect(isQuantityColumn(c.HR) && c.HR.si.length).toBe(3);
+    expect(errorOf("departure(if97(), 400 K, 1 bar)")).toMatch(/argument m of departure\(\): if97\(\)/);
+    expect(errorOf('departure(m, 400 K, 1 bar, {road: "x"})')).toMatch(/option "road" of departure\(\)/);
+    expect(errorOf('departure(m, 400 K, 1 bar, {route: "x"})')).toMatch(/route of departure\(\) must be/);
+  });
+});
+
+describe("change", () => {
+  it("change(s1, s2) equals the difference of the totals (definition, exact)", () => {
+    session.run("s2 = state(m, 400 K, 20 bar); c = change(s, s2);", sink);
+    for (const [k, unit] of [["H", "J/mol"], ["S", "J/(mol K)"], ["U", "J/mol"], ["G", "J/mol"], ["A", "J/mol"], ["V", "m^3/mol"], ["T", "K"], ["P", "Pa"]]) {
+      const d = num(`c.d${k}`, unit!);
+      expect(Math.abs(d - (num(`s2.${k}`, unit!) - num(`s.${k}`, unit!)))).toBeLessThan(1e-9 * Math.abs(d) + 1e-12);
+    }
+  });
+
+  it("change refuses states of different models, fluids or reference states", () => {
+    expect(errorOf('change(s, state(srk("propane"), 300 K, 1 bar))')).toMatch(/argument s2 of change\(\): the states come from different models or fluids/);
+    expect(errorOf('change(s, state(pr("ethane"), 300 K, 1 bar))')).toMatch(/different models or fluids/);
+    expect(errorOf('change(s, state(pr("propane", {reference: {T: 300 K}}), 300 K, 1 bar))')).toMatch(/different reference states/);
+    expect(errorOf("change(s, {a: 1})")).toMatch(/argument s2 of change\(\) needs a state record/);
+  });
+
+  it("change of span states gives columns", () => {
+    const c = value("change(state(m, span(300 K, 400 K, 4), 1 bar), state(m, span(310 K, 410 K, 4), 1 bar))") as Record<string, unknown>;
+    expect(isQuantityColumn(c.dT) && Array.from(c.dT.si).map((x) => Math.round(x * 1e9) / 1e9)).toEqual([10, 10, 10, 10]);
+  });
+});
