@@ -57,7 +57,7 @@ describe("state", () => {
   });
 
   it("state: {P, H} between the saturated liquid and vapour gives a two-phase state whose x follows the lever rule", () => {
-    session.run('L = state(m, 300 K, psat(m, 300 K), "liquid"); G = state(m, 300 K, psat(m, 300 K), "vapor"); mid = state(m, {P: psat(m, 300 K), H: 0.25 * L.H + 0.75 * G.H});', sink);
+    session.run('sL = state(m, 300 K, psat(m, 300 K), "liquid"); sG = state(m, 300 K, psat(m, 300 K), "vapor"); mid = state(m, {P: psat(m, 300 K), H: 0.25 * sL.H + 0.75 * sG.H});', sink);
     expect(value("mid.phase")).toBe("two-phase");
     expect(Math.abs((value("mid.x") as number) - 0.75)).toBeLessThan(1e-6);
     expect(Number.isNaN(value("mid.Cp") as number)).toBe(true);
