@@ -46,6 +46,11 @@ export interface RuleResult {
   error: number;
   /** Kronrod estimate of the integral of |f| (sets the rounding floor). */
   resabs: number;
+  /**
+   * Kronrod estimate of the integral of |f - mean|; an error estimate equal to it means the rule
+   * resolved nothing (QUADPACK skips its round-off counters on such intervals).
+   */
+  resasc: number;
 }
 
 /**
@@ -86,5 +91,5 @@ export function kronrod21(g: (x: number) => number, a: number, b: number): RuleR
   let error = Math.abs((resK - resG) * half);
   if (resasc !== 0 && error !== 0) error = resasc * Math.min(1, Math.pow((200 * error) / resasc, 1.5));
   if (resabs > TINY) error = Math.max(50 * EPS * resabs, error);
-  return { value, error, resabs };
+  return { value, error, resabs, resasc };
 }
