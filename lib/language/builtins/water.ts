@@ -22,7 +22,7 @@ export type Row = Record<string, number | string>;
 /** Row of a water state; `phase` (if not "stable") must match IF97's single stable phase. */
 export function waterRow(st: WaterState, fn: string, phase?: string): Row {
   if (phase && phase !== "stable" && st.phase !== phase && !(st.phase === "two-phase")) {
-    throw new ArgumentError(`argument phase of ${fn}(): water at T = ${st.T.toPrecision(6)} K, P = ${st.p.toPrecision(6)} Pa is ${st.phase} (IF97 region ${st.region}); IF97 gives only the stable phase, so "${phase}" cannot be had here`);
+    throw new ArgumentError(`argument phase of ${fn}(): water at T = ${Number(st.T.toPrecision(6))} K, P = ${Number(st.p.toPrecision(6))} Pa is ${st.phase} (IF97 region ${st.region}); IF97 gives only the stable phase, so "${phase}" cannot be had here`);
   }
   const m = toMolar(st);
   const row: Row = { T: st.T, P: st.p, phase: st.phase };
