@@ -1,0 +1,91 @@
+import { describe, expect, it } from "vitest";
+import type { Unit } from "mathjs";
+import { createSessionWithInternals } from "../../../../lib/language/createSession.js";
+import { isQuantityColumn } from "../../../../lib/language/values/column.js";
+import { getSubstance, psat as libPsat, pr, pureFluid, vdw } from "../../../../lib/thermo/index.js";
+
+const { session, internals } = createSessionWithInternals({ shouldStop: () => false });
+const sink = { stdout() {}, display() {}, clear() {} };
+const value = (code: string): unknown => {
+  const r = session.run(`__v = ${code};`, sink);
+  if (!r.ok) throw new Error(r.error.evalue);
+  return internals.scope.get("__v");
+};
+const num = (code: string, unit: string): number => (value(code) as Unit).toNumber(unit);
+const errorOf = (code: string): string => {
+  const r = session.run(code, sink);
+  return r.ok ? "" : r.error.evalue;
+};
+const rel = (a: number, b: number) => Math.abs(a / b - 1);
+
+describe("volume", () => {
+  // Smith, Van Ness & Abbott, 7th ed., Example 3.9 (from memory): n-butane at 350 K, 9.4573 bar (cm^3/mol).
+  const BOOK = [["vdw", 2667.1, 191.0], ["rk", 2555.3, 133.3], ["srk", 2520.3, 127.8], ["pr", 2486.1, 112.6]] as const;
+  for (const [id, Vv, Vl] of BOOK) {
+    it(`volume(${id}("n-butane"), 350 K, 9.4573 bar) gives the textbook vapour and liquid roots (0.1 %)`, () => {
+      expect(rel(num(`volume(${id}("n-butane"), 350 K, 9.4573 bar, "vapor")`, "cm^3/mol"), Vv)).toBeLessThan(1e-3);
+      expect(rel(num(`volume(${id}("n-butane"), 350 K, 9.4573 bar, "liquid")`, "cm^3/mol"), Vl)).toBeLessThan(1e-3);
+    });
+  }
+  it("volume rejects a liquid root above Tc with the supercritical message", () => {
+    expect(errorOf('volume(pr("methane"), 300 K, 50 bar, "liquid")')).toMatch(/liquid root asked of a supercritical fluid at T = 300 K > Tc = 190\.6 K/);
+  });
+});
+
+describe("pressure", () => {
+  it("pressure(vdw(x), T, V) is R T/(V - b) - a/V^2 with a = 27 R^2 Tc^2/(64 Pc), b = R Tc/(8 Pc) (van der Waals, from memory)", () => {
+    const co2 = getSubstance("carbon dioxide");
+    const R = 8.314462618;
+    const a = (27 * R * R * co2.Tc * co2.Tc) / (64 * co2.Pc);
+    const b = (R * co2.Tc) / (8 * co2.Pc);
+    const V = 0.5e-3;
+    expect(rel(num('pressure(vdw("carbon dioxide"), 300 K, 0.5 L/mol)', "Pa"), (R * 300) / (V - b) - a / (V * V))).toBeLessThan(1e-12);
+    expect(Math.abs(num('pressure(vdw("carbon dioxide"), 300 K, 0.5 L/mol)', "Pa") - vdw(pureFluid(co2)).pressure(300, V))).toBeLessThan(1e-6);
+  });
+  it("pressure(m, T, volume(m, T, P)) returns P (root polished to 1e-10)", () => {
+    expect(rel(num('pressure(pr("propane"), 350 K, volume(pr("propane"), 350 K, 10 bar))', "Pa"), 1e6)).toBeLessThan(1e-10);
+  });
+  it("pressure rejects a model without P(T, V)", () => {
+    expect(errorOf('pressure(lk("propane"), 350 K, 1 L/mol)')).toMatch(/argument m of pressure\(\): .* is not explicit in pressure/);
+  });
+});
+
+describe("zfactor", () => {
+  it("zfactor of the ideal gas is 1 and of PR matches state().Z", () => {
+    expect(value('zfactor(idealgas("nitrogen"), 300 K, 100 bar)')).toBe(1);
+    expect(value('zfactor(pr("methane"), 250 K, 60 bar)')).toBe(value('state(pr("methane"), 250 K, 60 bar).Z'));
+  });
+  it("zfactor over a span gives a plain-number column", () => {
+    const c = value('zfactor(lk("propane"), span(350 K, 450 K, 3), 20 bar)');
+    expect(isQuantityColumn(c) && c.si.length).toBe(3);
+  });
+});
+
+describe("internal_pressure", () => {
+  it("internal_pressure is a/V^2 for van der Waals (exact for vdW) and 0 for the ideal gas", () => {
+    const n2 = getSubstance("nitrogen");
+    const R = 8.314462618;
+    const a = (27 * R * R * n2.Tc * n2.Tc) / (64 * n2.Pc);
+    expect(rel(num('internal_pressure(vdw("nitrogen"), 300 K, 1 L/mol)', "Pa"), a / 1e-6)).toBeLessThan(1e-8);
+    expect(Math.abs(num('internal_pressure(idealgas("nitrogen"), 300 K, 1 L/mol)', "Pa"))).toBeLessThan(1e-6);
+  });
+});
+
+describe("psat", () => {
+  it("psat(pr(x), T) equals the thermo library's equal-fugacity result", () => {
+    const lib = libPsat(pr(pureFluid(getSubstance("propane"))), 300).P;
+    expect(rel(num('psat(pr("propane"), 300 K)', "Pa"), lib)).toBeLessThan(1e-12);
+  });
+  it("psat(pr(x), 0.7 Tc) reproduces the acentric-factor definition log10(Psat/Pc) = -1 - omega within 0.1 in log10 (common practice)", () => {
+    const s = getSubstance("n-butane");
+    const P = num(`psat(pr("n-butane"), ${0.7 * s.Tc} K)`, "Pa");
+    expect(Math.abs(Math.log10(P / s.Pc) - (-1 - s.omega))).toBeLessThan(0.1);
+  });
+  it("tsat inverts psat (1e-8)", () => {
+    expect(rel(num('tsat(pr("propane"), psat(pr("propane"), 300 K))', "K"), 300)).toBeLessThan(1e-8);
+  });
+  it("psat errors: above Tc, and for a mixture", () => {
+    expect(errorOf('psat(pr("methane"), 200 K)')).toMatch(/argument T of psat\(\)[\s\S]*critical temperature/);
+    expect(errorOf("psat(pr(mixture({methane: 0.5, ethane: 0.5})), 200 K)")).toMatch(/argument m of psat\(\)[\s\S]*pure fluids/);
+  });
+});
