@@ -129,8 +129,9 @@ function readOptions(fn: string, o: Record<string, unknown>, withProperty: boole
     Tr, Pr,
     phase: choice("phase", PHASES, "stable"),
     route: withProperty ? choice("route", ["closed", "integrate"] as const, "closed") : "closed",
-    // A sweep over two decades or more reads best on a log axis.
-    log: (o.log as boolean | undefined) ?? Pr[Pr.length - 1]! / Pr[0]! >= 100,
+    // A sweep of your own over two decades or more reads best on a log axis; the default sweep is
+    // evenly spaced, so it keeps the linear axis of printed generalized charts.
+    log: (o.log as boolean | undefined) ?? (o.Pr !== undefined && Pr[Pr.length - 1]! / Pr[0]! >= 100),
     title: o.title as string | undefined,
   };
 }
@@ -209,7 +210,8 @@ function computeCurves(fn: string, entries: Entry[], o: ChartOptions, ctx: Built
           continue;
         }
         nearCritical ||= r.flags.nearCritical;
-        const warnings = e.data.validity?.(T, P) ?? [];
+        // The near-critical caution gets one note of its own below, for every model alike.
+        const warnings = (e.data.validity?.(T, P) ?? []).filter((w) => !/critical point/.test(w));
         if (warnings.length > 0 && outside++ === 0) firstOutside = warnings[0]!;
         add(pr, r);
       }
@@ -253,7 +255,7 @@ function build(fn: string, args: unknown[], withProperty: boolean, ctx: BuiltinC
 }
 
 const MODELS_DOC = 'one or more models (pr("methane"), srk("methane"), ...), or a record {label: model}; an options record may follow last';
-const COMMON_OPTIONS = "Tr: reduced temperatures (default [1, 1.1, 1.2, 1.5, 2, 3]), Pr: reduced pressures (default 0.01 to 10, 100 points), phase: \"stable\" | \"vapor\" | \"liquid\", log: true/false (log Pr axis; default when Pr spans two decades), title";
+const COMMON_OPTIONS = "Tr: reduced temperatures (default [1, 1.1, 1.2, 1.5, 2, 3]), Pr: reduced pressures (default 0.01 to 10, 100 points), phase: \"stable\" | \"vapor\" | \"liquid\", log: true/false (log Pr axis; default true when your Pr spans two decades or more), title";
 
 export const charts: BuiltinDef[] = [
   defineBuiltin({

@@ -52,8 +52,10 @@ describe("zchart", () => {
       expect(Math.abs(r.y - 1), `${r.series} ${r.style}`).toBeLessThan(1e-4);
     }
     expect(spec.data.values.filter((v) => v.x === 1e-5)).toHaveLength(12);
-    // Two decades or more of Pr: a log axis by default.
+    // Two decades or more of Pr: a log axis by default; the default sweep keeps a linear axis.
     expect(spec.encoding.x.scale.type).toBe("log");
+    expect(chartOf(`zchart(pr(${W02}))`).spec.encoding.x.scale.type).toBe("linear");
+    expect(chartOf(`zchart(pr(${W02}), {Pr: logspan(0.01, 10, 5), log: false})`).spec.encoding.x.scale.type).toBe("linear");
     expect(spec.encoding.y.title).toBe("Z = PV/(RT)");
   });
   it("zchart: Peng-Robinson matches an independent evaluation of its cubic at Tr = 1.5, Pr = 2 (omega 0.2)", () => {
@@ -135,6 +137,25 @@ describe("departure_chart", () => {
       // ... and not zero further up: at Pr = 1 and Tr = 1 every group is clearly non-zero.
       expect(spec.data.values.filter((r) => r.x === 1 && r.series === "Tr = 1").every((r) => Math.abs(r.y) > 0.01)).toBe(true);
     }
+  });
+  it("departure_chart: the groups keep their definitions (G/RT = ln phi, A, U from H and Z)", () => {
+    const at = (p: string) => chartOf(`departure_chart(srk(${W02}), {property: "${p}", Tr: [1.3], Pr: [0.7, 2.5]})`).spec;
+    const z = chartOf(`zchart(srk(${W02}), {Tr: [1.3], Pr: [0.7, 2.5]})`).spec;
+    const [H, G, A, U, lnphi, Z] = ["H", "G", "A", "U", "lnphi"].map((p) => curve(at(p), "1.3").map((r) => r.y)).concat([curve(z, "1.3").map((r) => r.y)]);
+    expect(Z).toHaveLength(2);
+    Z!.forEach((zk, k) => {
+      // Definitions: GR = RT ln phi; AR = GR - RT (Z - 1); UR = HR - RT (Z - 1), so UR/(R Tc) = HR/(R Tc) - Tr (Z - 1).
+      expect(Math.abs(G![k]! - lnphi![k]!)).toBeLessThan(1e-12);
+      expect(Math.abs(A![k]! - (lnphi![k]! - (zk - 1)))).toBeLessThan(1e-12);
+      expect(Math.abs(U![k]! - (H![k]! - 1.3 * (zk - 1)))).toBeLessThan(1e-9);
+    });
+  });
+  it("departure_chart: stops when the user interrupts", () => {
+    let calls = 0;
+    const session = createSession({ shouldStop: () => ++calls > 20 });
+    const r = session.run(`departure_chart(pr(${W02}), {Tr: [1.1, 1.5], Pr: span(0.1, 5, 200)})`, { stdout() {}, display() {}, clear() {} });
+    expect(r.ok).toBe(false);
+    expect(r.ok ? "" : r.error.evalue).toMatch(/interrupted/);
   });
   it("departure_chart: models compared carry one dash style each and labels per model", () => {
     const { spec, text } = chartOf(`departure_chart(pr("propane"), srk("propane"), lk("propane"), {Tr: [1.2], Pr: span(0.1, 3, 5)})`);
