@@ -38,3 +38,17 @@ describe("kronrod21 constants", () => {
     expect(r.error).toBeCloseTo(50 * Number.EPSILON * 3, 25);
   });
 });
+
+describe("kronrod21 resasc", () => {
+  it("kronrod21 resasc is the integral of |g - mean|: 0 for a constant, = resabs for an odd g on [-1, 1]", () => {
+    // A constant has no deviation from its mean (up to rounding); for g(x) = x on
+    // [-1, 1] the mean is 0, so resasc and resabs are the same sum, both ~ int |x| dx = 1 (calculus).
+    const flat = kronrod21(() => 4, 0, 2);
+    // Only rounding remains (the weights sum to 2 within a few eps); the estimate sits at its floor.
+    expect(flat.resasc).toBeLessThan(1e-14);
+    expect(flat.error).toBeLessThanOrEqual(50 * Number.EPSILON * flat.resabs);
+    const odd = kronrod21((x) => x, -1, 1);
+    expect(odd.resasc).toBeCloseTo(odd.resabs, 15);
+    expect(Math.abs(odd.resabs - 1)).toBeLessThan(1e-2);
+  });
+});
