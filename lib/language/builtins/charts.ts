@@ -160,6 +160,7 @@ function computeCurves(fn: string, entries: Entry[], o: ChartOptions, ctx: Built
   const notes: string[] = [];
   let nearCritical = false;
   let stepDrawn = false;
+  let subcritical = false;
   for (const e of entries) {
     if (o.route === "integrate" && typeof e.eos.pressure !== "function") {
       throw new ArgumentError(`option route "integrate" of ${fn}() needs a pressure-explicit model P(T, V); ${e.label} has none (use route "closed")`);
@@ -183,6 +184,7 @@ function computeCurves(fn: string, entries: Entry[], o: ChartOptions, ctx: Built
       };
       let sat: { pr: number; liquid: Residual; vapor: Residual } | undefined;
       if (pure && o.phase === "stable" && tr < 1) {
+        subcritical = true;
         try {
           const s = psat(e.eos, T, { shouldStop: ctx.shouldStop });
           if (s.P / Pc > o.Pr[0]! && s.P / Pc < o.Pr[o.Pr.length - 1]!) sat = { pr: s.P / Pc, liquid: s.liquid, vapor: s.vapor };
@@ -225,7 +227,10 @@ function computeCurves(fn: string, entries: Entry[], o: ChartOptions, ctx: Built
       notes.push(`${who}mixture ${e.data.fluidText}: Tr and Pr use Kay's-rule pseudo-critical constants Tpc = ${shortNumber(Tc)} K, Ppc = ${shortNumber(Pc / 1e5)} bar; one phase assumed (no phase-split test)`);
     }
   }
-  if (stepDrawn) notes.push("Tr < 1: the stable (lowest Gibbs energy) root is followed; the vertical step is the saturation pressure by equal fugacity, vapour below, liquid above");
+  if (subcritical) {
+    notes.push(`Tr < 1: the stable (lowest Gibbs energy) root is followed${stepDrawn ? "; the vertical step is the saturation pressure by equal fugacity, vapour below, liquid above" : ""}`);
+  }
+  if (o.phase !== "stable") notes.push(`phase "${o.phase}": the ${o.phase === "vapor" ? "vapour" : "liquid"} root is followed where it exists, metastable past the saturation pressure`);
   if (nearCritical) notes.push("points near the critical point (|Tr - 1| < 0.03, |Pr - 1| < 0.1) change steeply; read them with care");
   if (curves.length === 0) throw new ArgumentError(`${fn}(): no curve has any point: ${notes.join("; ")}`);
   return { curves, notes };

@@ -99,6 +99,11 @@ describe("zchart", () => {
     expect(curve(spec, "0.7").length).toBe(10);
     expect(curve(spec, "1.5").length).toBe(0);
     expect(text).toMatch(/Tr = 1\.5: no liquid root at any Pr; curve left out/);
+    expect(text).toMatch(/phase "liquid": the liquid root is followed where it exists, metastable past the saturation pressure/);
+    // Below Tc with the stable root but the whole sweep on the vapour side: the note says so, without a step.
+    const low = chartOf(`zchart(pr(${W02}), {Tr: [0.7], Pr: [0.001, 0.01]})`).text;
+    expect(low).toMatch(/Tr < 1: the stable \(lowest Gibbs energy\) root is followed\n|Tr < 1: the stable \(lowest Gibbs energy\) root is followed$/);
+    expect(low).not.toMatch(/vertical step/);
   });
   it("zchart: a mixture is reduced by Kay's-rule pseudo-critical constants, said in a note", () => {
     const { text, spec } = chartOf("zchart(pr(mixture({methane: 0.9, ethane: 0.1})), {Tr: [1.5], Pr: [1, 2]})");
