@@ -34,6 +34,14 @@ const CASES: Case[] = [
   { name: "x^-1.5 [1,inf)", f: (x) => x ** -1.5, py: "x**-1.5", a: 1, b: inf, exact: 2 },
   { name: "V^-2 [1e-4,inf)", f: (v) => 1 / (v * v), py: "1/(x*x)", a: 1e-4, b: inf, exact: 1e4 },
   { name: "exp(x) [0,1]", f: Math.exp, py: "np.exp(x)", a: 0, b: 1, exact: Math.E - 1 },
+  // int_0^1 x^(a-1) ln x dx = -1/a^2 with a = 1/2 (derivative of 1/a in a)
+  { name: "log(x)/sqrt(x) [0,1]", f: (x) => Math.log(x) / Math.sqrt(x), py: "np.log(x)/np.sqrt(x)", a: 0, b: 1, exact: -4 },
+  // Beta(1/2, 1/2) = pi (Abramowitz & Stegun 6.2.1, from memory): singular at both ends
+  { name: "1/sqrt(x(1-x)) [0,1]", f: (x) => 1 / Math.sqrt(x * (1 - x)), py: "1/np.sqrt(x*(1-x))", a: 0, b: 1, exact: Math.PI },
+  // Gamma(3) = 2
+  { name: "x^2 e^-x [0,inf)", f: (x) => x * x * Math.exp(-x), py: "x*x*np.exp(-x)", a: 0, b: inf, exact: 2 },
+  // antiderivative e^x
+  { name: "exp(x) (-inf,0]", f: Math.exp, py: "np.exp(x)", a: -inf, b: 0, exact: 1 },
 ];
 
 export interface IntegralRow {
