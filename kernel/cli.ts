@@ -7,7 +7,10 @@
 const HELP = `caloric: a Jupyter kernel for engineering thermodynamics
 
 Usage:
-  caloric kernel -f CONNECTION_FILE [--in-process]   run the kernel (Jupyter starts this for you)
+  caloric kernel -f CONNECTION_FILE [--in-process] [--interrupt-grace-ms MS]
+                                                    run the kernel (Jupyter starts this for you);
+                                                    a cell that ignores an interrupt for MS (default
+                                                    2000) is stopped by restarting the engine
   caloric install [--user | --sys-prefix | --prefix DIR] [--name NAME]
                                                     install the kernelspec (default --user, which
                                                     honours JUPYTER_DATA_DIR)
@@ -24,16 +27,25 @@ async function main(argv: string[]): Promise<number> {
     case "kernel": {
       let file: string | undefined;
       let inProcess = false;
+      let graceMs: number | undefined;
+      let sessionModule: string | undefined;
       for (let i = 0; i < rest.length; i++) {
         const a = rest[i]!;
         if (a === "-f" || a === "--connection-file") file = rest[++i];
         else if (a.startsWith("--connection-file=")) file = a.slice("--connection-file=".length);
         else if (a === "--in-process") inProcess = true;
-        else throw new Error(`kernel: unknown option ${JSON.stringify(a)} (expected -f CONNECTION_FILE)`);
+        else if (a === "--interrupt-grace-ms") {
+          const v = rest[++i];
+          graceMs = Number(v);
+          if (v === undefined || !Number.isFinite(graceMs) || graceMs < 0) throw new Error(`kernel: --interrupt-grace-ms expects milliseconds >= 0, got ${JSON.stringify(v ?? "")}`);
+        } else if (a === "--session-module") {
+          sessionModule = rest[++i];
+          if (!sessionModule) throw new Error("kernel: --session-module expects a module URL");
+        } else throw new Error(`kernel: unknown option ${JSON.stringify(a)} (expected -f CONNECTION_FILE, --in-process, --interrupt-grace-ms MS)`);
       }
       if (!file) throw new Error("kernel: missing -f CONNECTION_FILE");
       const { runKernel } = await import("./main.js");
-      await runKernel({ connectionFile: file, inProcess });
+      await runKernel({ connectionFile: file, inProcess, graceMs, sessionModule });
       return -1; // keep running: the kernel exits on shutdown_request
     }
     case "install": {

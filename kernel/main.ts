@@ -1,10 +1,12 @@
 /**
- * Composition root of the kernel process: binds the sockets from the connection file, answers on the
- * main thread, and starts the engine worker in the background right after binding so kernel_info
- * does not wait for it.
+ * Composition root of the kernel process: binds the sockets from the connection file and answers on
+ * the main thread. The engine (and with it the worker thread and the cell language) is loaded only
+ * after the first kernel_info exchange has been sent, or on the first request that needs it, or after
+ * `engineStartMs` at the latest: on a busy machine a worker loading mathjs next to the first
+ * kernel_info_reply would slow the kernel's cold start.
  */
 import { randomUUID } from "node:crypto";
-import { InProcessEngine, WorkerEngine, type Interpreter } from "./engine/index.js";
+import type { Interpreter } from "./engine/index.js";
 import { ExecutionState } from "./execution/index.js";
 import { Dispatcher, HANDLERS, type KernelServices } from "./handlers/index.js";
 import { IMPLEMENTATION_VERSION, makeBroadcast, type Message } from "./protocol/index.js";
@@ -16,53 +18,80 @@ export interface KernelOptions {
   inProcess?: boolean;
   /** Interrupt grace period before the worker is replaced, ms (default 2000). */
   graceMs?: number;
+  /** Module URL exporting createSession (default: the cell language; tests pass a scripted session). */
+  sessionModule?: string;
+  /** Latest start of the engine after the sockets are bound, ms (default 500). */
+  engineStartMs?: number;
   /** How often to check that the parent process (JPY_PARENT_PID) is alive, ms (default 1000). */
   parentPollMs?: number;
+  /** Install SIGINT (interrupt) and SIGTERM (stop) handlers (default true). */
+  handleSignals?: boolean;
+  /** Ends the process once the kernel has stopped (default process.exit). */
+  exit?: (code: number) => void;
   log?: (line: string) => void;
+}
+
+/** What runKernel hands back: for tests and embedding; Jupyter drives the kernel through messages. */
+export interface KernelHandle {
+  /** True once the engine has been asked to start. */
+  readonly engineStarted: boolean;
+  /** Shuts the engine down, closes the sockets (after pending sends) and calls `exit(code)`. */
+  stop(code?: number): Promise<void>;
 }
 
 const stderrLog = (line: string) => process.stderr.write(`[caloric] ${line}\n`);
 
-/** A lazily bound engine: calls wait for the engine, which is created after the sockets are bound. */
-class DeferredEngine implements Interpreter {
+/** An engine created on demand: calls made before it exists wait for it; afterwards they go straight through. */
+class LazyEngine implements Interpreter {
   private engine: Interpreter | undefined;
-  private readonly ready: Promise<Interpreter>;
-  private resolve!: (e: Interpreter) => void;
-  constructor() {
-    this.ready = new Promise((r) => (this.resolve = r));
+  private starting: Promise<Interpreter> | undefined;
+  constructor(private readonly create: () => Promise<Interpreter>) {}
+
+  get started(): boolean {
+    return this.starting !== undefined;
   }
-  set(engine: Interpreter): void {
-    this.engine = engine;
-    this.resolve(engine);
+  /** Starts the engine if it has not been started; resolves when it is usable. */
+  start(): Promise<Interpreter> {
+    this.starting ??= this.create().then((e) => (this.engine = e));
+    return this.starting;
   }
-  execute: Interpreter["execute"] = async (code, onOutput) => (await this.ready).execute(code, onOutput);
-  evaluate: Interpreter["evaluate"] = async (e) => (await this.ready).evaluate(e);
-  complete: Interpreter["complete"] = async (c, p) => (await this.ready).complete(c, p);
-  inspect: Interpreter["inspect"] = async (c, p, d) => (await this.ready).inspect(c, p, d);
-  isComplete: Interpreter["isComplete"] = async (c) => (await this.ready).isComplete(c);
+  private with<T>(call: (e: Interpreter) => Promise<T>): Promise<T> {
+    return this.engine ? call(this.engine) : this.start().then(call);
+  }
+  execute: Interpreter["execute"] = (code, onOutput) => this.with((e) => e.execute(code, onOutput));
+  evaluate: Interpreter["evaluate"] = (expression) => this.with((e) => e.evaluate(expression));
+  complete: Interpreter["complete"] = (code, pos) => this.with((e) => e.complete(code, pos));
+  inspect: Interpreter["inspect"] = (code, pos, detail) => this.with((e) => e.inspect(code, pos, detail));
+  isComplete: Interpreter["isComplete"] = (code) => this.with((e) => e.isComplete(code));
   interrupt(): void {
     this.engine?.interrupt();
   }
   async shutdown(): Promise<void> {
-    await this.engine?.shutdown();
+    if (this.starting) await (await this.starting.catch(() => undefined))?.shutdown();
   }
 }
 
-export async function runKernel(options: KernelOptions): Promise<void> {
+export async function runKernel(options: KernelOptions): Promise<KernelHandle> {
   const log = options.log ?? stderrLog;
+  const exit = options.exit ?? ((code: number) => process.exit(code));
   const info = readConnectionFile(options.connectionFile);
   const sockets = await KernelSockets.bind(info, { log });
   const identity = { session: randomUUID(), username: "caloric" };
-  const engine = new DeferredEngine();
-  let stopping = false;
-
-  const stop = async (code: number) => {
-    if (stopping) return;
-    stopping = true;
-    await engine.shutdown().catch(() => {});
-    await sockets.close();
-    process.exit(code);
-  };
+  const engine = new LazyEngine(async () => {
+    const { InProcessEngine, WorkerEngine } = await import("./engine/index.js");
+    if (options.inProcess) return InProcessEngine.create(options.sessionModule ? (await import(options.sessionModule)).createSession : undefined);
+    return new WorkerEngine({ graceMs: options.graceMs, sessionModule: options.sessionModule, log });
+  });
+  const startEngine = () => void engine.start().catch((e: Error) => log(`the engine failed to start: ${e.stack ?? e.message}`));
+  let fallback: NodeJS.Timeout | undefined;
+  let stopping: Promise<void> | undefined;
+  const stop = (code = 0) =>
+    (stopping ??= (async () => {
+      clearTimeout(fallback);
+      await engine.shutdown().catch(() => {});
+      await sockets.close();
+      exit(code);
+    })());
 
   const services: KernelServices = {
     engine,
@@ -72,23 +101,30 @@ export async function runKernel(options: KernelOptions): Promise<void> {
     requestShutdown: () => setImmediate(() => void stop(0)),
     log,
   };
-  const dispatcher = new Dispatcher({
-    services,
-    handlers: HANDLERS,
-    outbox: { send: (channel, message) => sockets.send(channel, message as unknown as WireMessage) },
-  });
+  const send = (channel: Parameters<KernelSockets["send"]>[0], message: Message) => {
+    const sent = sockets.send(channel, message as unknown as WireMessage);
+    // The idle that ends the first kernel_info exchange: the client has its answer, so the engine may load now.
+    if (!engine.started && channel === "iopub" && (message.parent_header as { msg_type?: string }).msg_type === "kernel_info_request" && message.content.execution_state === "idle") {
+      void sent.then(() => setImmediate(startEngine));
+    }
+    return sent;
+  };
+  const dispatcher = new Dispatcher({ services, handlers: HANDLERS, outbox: { send } });
   sockets.listen((channel, message) => void dispatcher.receive(channel, message as unknown as Message));
   void sockets.send("iopub", makeBroadcast(undefined, "status", { execution_state: "starting" }, identity) as unknown as WireMessage);
+  fallback = setTimeout(startEngine, options.engineStartMs ?? 500);
 
-  // The engine starts after the event loop has had a turn to answer an early kernel_info_request.
-  setImmediate(() => {
-    if (options.inProcess) void InProcessEngine.create().then((e) => engine.set(e));
-    else engine.set(new WorkerEngine({ graceMs: options.graceMs, log }));
-  });
-
-  process.on("SIGINT", () => engine.interrupt());
-  process.on("SIGTERM", () => void stop(0));
+  if (options.handleSignals ?? true) {
+    process.on("SIGINT", () => engine.interrupt());
+    process.on("SIGTERM", () => void stop(0));
+  }
   watchParent(options.parentPollMs ?? 1000, log, () => void stop(0));
+  return {
+    get engineStarted() {
+      return engine.started;
+    },
+    stop,
+  };
 }
 
 /** Exits with the parent: jupyter_client sets JPY_PARENT_PID; a dead parent would leave us orphaned. */

@@ -5,7 +5,7 @@
 import { parentPort, workerData } from "node:worker_threads";
 import type { CellSink, Session, SessionOptions } from "../../lib/language/index.js";
 import type { FromWorker, ToWorker, WorkerData } from "./protocol.js";
-import { finishBundles } from "./finish.js";
+import { finishBundles, needsFinishing } from "./finish.js";
 
 type SessionFactory = (options: SessionOptions) => Session;
 
@@ -13,28 +13,54 @@ if (!parentPort) throw new Error("kernel/engine/worker must run in a worker thre
 const port = parentPort;
 const data = workerData as WorkerData;
 const flag = new Int32Array(data.flag);
-// Chart bundles leave the language without pictures (vega renders asynchronously); every message goes
-// through one chain that adds them, so outputs keep their order and "done" follows the last output.
+
+/** postMessage, turning a value that cannot be cloned into a failed call instead of a lost one. */
+function send(m: FromWorker): void {
+  try {
+    port.postMessage(m);
+  } catch (e) {
+    if (m.kind === "ready") throw e;
+    port.postMessage({ kind: "fail", id: m.id, message: `the engine could not send its answer: ${(e as Error).message}` } satisfies FromWorker);
+  }
+}
+
+// Chart bundles leave the language without pictures (vega renders asynchronously, so only after the
+// synchronous run has returned). Such a message, and every message behind it, goes through one chain
+// that adds them, so outputs keep their order and "done" follows the last output. Anything else is
+// sent at once: stdout and plain displays reach the user while a long cell is still running, and a
+// trivial cell's answer takes no extra turns.
 let chain: Promise<void> = Promise.resolve();
+let queued = 0;
 const post = (m: FromWorker) => {
-  chain = chain.then(async () => port.postMessage(await finishBundles(m)));
+  if (queued === 0 && !needsFinishing(m)) return send(m);
+  queued++;
+  chain = chain.then(async () => {
+    try {
+      send(await finishBundles(m));
+    } finally {
+      queued--;
+    }
+  });
 };
 
-const sessionReady: Promise<Session> = (import(data.sessionModule) as Promise<{ createSession: SessionFactory }>).then((m) =>
-  m.createSession({ shouldStop: () => Atomics.load(flag, 0) === 1 }),
-);
+let session: Session | undefined;
+const sessionReady: Promise<Session> = (import(data.sessionModule) as Promise<{ createSession: SessionFactory }>).then((m) => {
+  session = m.createSession({ shouldStop: () => Atomics.load(flag, 0) === 1 });
+  return session;
+});
 
 port.on("message", (request: ToWorker) => {
+  if (session) return handle(session, request);
   void sessionReady.then(
-    (session) => handle(session, request),
+    (s) => handle(s, request),
     (e: Error) => post({ kind: "fail", id: request.id, message: `the cell language failed to load: ${e.message}` }),
   );
 });
 
 function handle(session: Session, request: ToWorker): void {
   const { id } = request;
+  let value: unknown;
   try {
-    let value: unknown;
     switch (request.op) {
       case "run": {
         const sink: CellSink = {
@@ -58,10 +84,10 @@ function handle(session: Session, request: ToWorker): void {
         value = session.isComplete(request.code);
         break;
     }
-    post({ kind: "done", id, value });
   } catch (e) {
-    post({ kind: "fail", id, message: (e as Error)?.stack ?? String(e) });
+    return post({ kind: "fail", id, message: (e as Error)?.stack ?? String(e) });
   }
+  post({ kind: "done", id, value });
 }
 
 void sessionReady.then(() => post({ kind: "ready" }), () => {});

@@ -27,6 +27,14 @@ const here = import.meta.url;
 const fromSource = here.endsWith(".ts");
 /** Compiled builds run worker.js; under the test runner (TypeScript sources) the worker loads worker.ts through tsx. */
 const WORKER_URL = new URL(fromSource ? "./worker.ts" : "./worker.js", here);
+/** tsx's loader API, resolved from here so an eval'd worker finds it whatever the working directory. */
+function tsxApi(): string {
+  try {
+    return import.meta.resolve("tsx/esm/api");
+  } catch {
+    return "tsx/esm/api";
+  }
+}
 const DEFAULT_SESSION_MODULE = new URL(fromSource ? "../../lib/language/index.ts" : "../../lib/language/index.js", here).href;
 
 export class WorkerEngine implements Interpreter {
@@ -54,10 +62,12 @@ export class WorkerEngine implements Interpreter {
   private spawn(): void {
     this.generation++;
     const data: WorkerData = { flag: this.flag.buffer as SharedArrayBuffer, sessionModule: this.sessionModule };
-    const worker = fromSource
-      ? // Under the test runner the sources are TypeScript: register tsx inside the worker, then load the entry.
-        new Worker(`import("tsx/esm/api").then((m) => { m.register(); return import(${JSON.stringify(WORKER_URL.href)}); })`, { eval: true, workerData: data })
-      : new Worker(WORKER_URL, { workerData: data });
+    // TypeScript sources (the test runner, or a test session module given to the compiled kernel):
+    // register tsx inside the worker, then load the entry. Compiled builds with the language never load tsx.
+    const worker =
+      fromSource || this.sessionModule.endsWith(".ts")
+        ? new Worker(`import(${JSON.stringify(tsxApi())}).then((m) => { m.register(); return import(${JSON.stringify(WORKER_URL.href)}); })`, { eval: true, workerData: data })
+        : new Worker(WORKER_URL, { workerData: data });
     worker.unref();
     worker.on("message", (m: FromWorker) => this.onMessage(m));
     worker.on("error", (e) => {
