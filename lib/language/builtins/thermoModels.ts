@@ -3,7 +3,8 @@
  * (Cp and totals against a declared reference state) and molar mass, ready for state() and friends.
  */
 import {
-  CP_FORM_UNAVAILABLE, DEFAULT_REFERENCE, cpWarnings, idealGas, idealGasFunctions, leeKesler,
+  CP_FORM_UNAVAILABLE, DEFAULT_REFERENCE, R, enthalpyIntegral, entropyIntegral, idealGas, idealGasCp, idealGasFunctions,
+  idealMixingEntropy, leeKesler,
   pseudoCritical, pr, referenceState, rk, srk, vdw, virial,
   type EosModel, type Fluid, type ReferenceState,
 } from "../../thermo/index.js";
@@ -49,20 +50,42 @@ function referenceOf(r: unknown, fn: string, ctx: BuiltinContext): ReferenceStat
   return guard(fn, () => referenceState(T, P, H, S), { T0: "reference.T", P0: "reference.P", H0: "reference.H", S0: "reference.S" });
 }
 
-/** Ideal-gas part of a fluid (lib/thermo idealGasFunctions), or why it is unavailable (a component without Cp). */
+/**
+ * Ideal-gas part of a fluid, or why it is unavailable (a component without Cp). H and S are composed
+ * from lib/thermo's exact Cp integrals (the same formulas as idealGasFunctions documents:
+ * H = H0 + sum x_i int Cp_i dT, S = S0 + sum x_i int Cp_i/T dT - R ln(P/P0) - R sum x ln x) without
+ * building extrapolation texts per call, which a 10,000-point span would otherwise pay for.
+ */
 export function idealGasPart(fluid: Fluid, ref: ReferenceState): IdealGasPart | string {
   const missing = fluid.components.filter((c) => c.cp.form === CP_FORM_UNAVAILABLE).map((c) => c.name);
   if (missing.length > 0) return `no ideal-gas Cp for ${missing.join(", ")}: totals H, S, U, G, A and Cp, Cv, w are not available (give the substance a cp)`;
   const f = idealGasFunctions(fluid.components, fluid.x, ref);
-  const comps = fluid.components;
+  const comps = fluid.components.filter((_, i) => fluid.x[i]! > 0);
+  const x = fluid.x.filter((xi) => xi > 0);
+  const mixing = idealMixingEntropy(fluid.x);
   return {
-    Cp: f.Cp,
-    H: f.H,
-    S: f.S,
+    Cp: comps.length === 1 ? (T) => idealGasCp(comps[0]!, T) : f.Cp,
+    H: (T) => {
+      let H = ref.H;
+      for (let i = 0; i < comps.length; i++) H += x[i]! * enthalpyIntegral(comps[i]!, ref.T, T);
+      return H;
+    },
+    S: (T, P) => {
+      let S = ref.S + mixing - R * Math.log(P / ref.P);
+      for (let i = 0; i < comps.length; i++) S += x[i]! * entropyIntegral(comps[i]!, ref.T, T);
+      return S;
+    },
     reference: f.reference,
     // One text per component and range (not per T), so a vectorised call lists each caution once.
-    warnings: (T) => comps.filter((c) => cpWarnings(c, T, ref.T).length > 0)
-      .map((c) => `ideal-gas Cp of ${c.name} extrapolated outside its fitted range ${c.cp.Tmin} to ${c.cp.Tmax} K`),
+    warnings: (T) => {
+      const out: string[] = [];
+      for (const c of comps) {
+        if (T < c.cp.Tmin || T > c.cp.Tmax || ref.T < c.cp.Tmin || ref.T > c.cp.Tmax) {
+          out.push(`ideal-gas Cp of ${c.name} extrapolated outside its fitted range ${c.cp.Tmin} to ${c.cp.Tmax} K`);
+        }
+      }
+      return out;
+    },
   };
 }
 

@@ -42,25 +42,32 @@ function notesOf(d: ModelData, s: ThermoState): string[] {
 /** SI row of an equation-of-state ThermoState (adds specific values, fugacity, Cp, Cv, w). */
 export function rowOf(d: ModelData, s: ThermoState, fn: string): Row {
   const M = d.M;
-  const row: Row = { T: s.T, P: s.P, phase: s.phase };
-  if (s.x !== undefined) row.x = s.x;
-  row.V = s.V;
-  row.v = s.V / M;
-  row.rho = M / s.V;
-  row.Z = s.Z;
-  if (s.H !== undefined) {
-    Object.assign(row, { H: s.H, S: s.S!, U: s.U!, G: s.G!, A: s.A!, h: s.H / M, s: s.S! / M, u: s.U! / M, g: s.G! / M, a: s.A! / M });
-  }
-  Object.assign(row, { HR: s.HR, SR: s.SR, UR: s.UR, GR: s.GR, AR: s.AR, phi: Math.exp(s.lnphi), lnphi: s.lnphi, f: Math.exp(s.lnphi) * s.P });
+  const tot = s.H !== undefined;
+  let Cp: number | undefined;
+  let Cv: number | undefined;
+  let w: number | undefined;
   if (d.idealGas) {
-    const hc = s.x !== undefined
-      ? { Cp: NaN, Cv: NaN, w: NaN }
-      : guard(fn, () => heatCapacity(d.eos!, s.T, s.P, s.V, d.idealGas!.Cp(s.T), M));
-    Object.assign(row, { Cp: hc.Cp, Cv: hc.Cv, cp: hc.Cp / M, cv: hc.Cv / M, w: hc.w });
+    if (s.x !== undefined) Cp = Cv = w = NaN;
+    else {
+      const hc = guard(fn, () => heatCapacity(d.eos!, s.T, s.P, s.V, d.idealGas!.Cp(s.T), M));
+      [Cp, Cv, w] = [hc.Cp, hc.Cv, hc.w];
+    }
   }
+  const phi = Math.exp(s.lnphi);
+  // One literal with every key (undefined where absent): one object shape for every point of a span.
+  const row = {
+    T: s.T, P: s.P, phase: s.phase as string, x: s.x,
+    V: s.V, v: s.V / M, rho: M / s.V, Z: s.Z,
+    H: s.H, S: s.S, U: s.U, G: s.G, A: s.A,
+    h: tot ? s.H! / M : undefined, s: tot ? s.S! / M : undefined, u: tot ? s.U! / M : undefined,
+    g: tot ? s.G! / M : undefined, a: tot ? s.A! / M : undefined,
+    HR: s.HR, SR: s.SR, UR: s.UR, GR: s.GR, AR: s.AR, phi, lnphi: s.lnphi, f: phi * s.P,
+    Cp, Cv, cp: Cp === undefined ? undefined : Cp / M, cv: Cv === undefined ? undefined : Cv / M, w,
+    notes: undefined as string | undefined,
+  };
   const notes = notesOf(d, s);
   if (notes.length > 0) row.notes = notes.join("; ");
-  return row;
+  return row as unknown as Row;
 }
 
 /** State at (T, P) on the requested phase by the model's equation of state. */
@@ -93,30 +100,55 @@ export function recordOf(row: Row, d: ModelData, ctx: BuiltinContext): Record<st
   return out;
 }
 
-/** Rows -> a record of columns (numbers) and arrays (phase); distinct notes are listed once with counts. */
-export function columnsOf(rows: Row[], d: ModelData, ctx: BuiltinContext): Record<string, unknown> {
-  const out: Record<string, unknown> = {};
-  const keys = ORDER.filter((k) => rows.some((r) => r[k] !== undefined));
-  for (const k of keys) {
-    if (STATE_FIELDS[k]) out[k] = ctx.column(Float64Array.from(rows, (r) => (typeof r[k] === "number" ? (r[k] as number) : NaN)), STATE_FIELDS[k]!);
-    else out[k] = rows.map((r) => r[k] ?? "");
-  }
-  Object.assign(out, identity(d));
+const NUMERIC = Object.keys(STATE_FIELDS);
+
+/**
+ * Collects the rows of a vectorised call straight into typed columns (no array of row objects), then
+ * builds a record of columns (numbers) and an array (phase); distinct notes are listed once with counts.
+ */
+export function columnCollector(n: number) {
+  const cols: Record<string, Float64Array> = {};
+  const phase = new Array<string>(n);
   // Notes that differ only in their numbers (Tr = 0.71, 0.72 ...) are one caution: shown once, first instance.
   const groups = new Map<string, { text: string; count: number }>();
-  for (const r of rows) {
-    if (typeof r.notes !== "string") continue;
-    for (const n of r.notes.split("; ")) {
-      const key = n.replace(/[-+]?\d[\d.]*(e[-+]?\d+)?/g, "#");
-      const g = groups.get(key);
-      if (g) g.count++;
-      else groups.set(key, { text: n, count: 1 });
-    }
-  }
-  if (groups.size > 0) {
-    out.notes = [...groups.values()]
-      .map((g) => (g.count === rows.length ? g.text : `${g.text} (${g.count} of ${rows.length} points${g.text.match(/\d/) ? ", first shown" : ""})`))
-      .join("; ");
-  }
-  return out;
+  const keyOf = new Map<string, string>();
+  return {
+    add(i: number, row: Row): void {
+      for (let k = 0; k < NUMERIC.length; k++) {
+        const key = NUMERIC[k]!;
+        const v = row[key];
+        if (typeof v === "number") (cols[key] ??= new Float64Array(n).fill(NaN))[i] = v;
+      }
+      phase[i] = String(row.phase ?? "");
+      if (typeof row.notes !== "string") return;
+      for (const note of row.notes.split("; ")) {
+        let key = keyOf.get(note);
+        if (key === undefined) keyOf.set(note, (key = note.replace(/[-+]?\d[\d.]*(e[-+]?\d+)?/g, "#")));
+        const g = groups.get(key);
+        if (g) g.count++;
+        else groups.set(key, { text: note, count: 1 });
+      }
+    },
+    finish(d: ModelData, ctx: BuiltinContext): Record<string, unknown> {
+      const out: Record<string, unknown> = {};
+      for (const k of ORDER) {
+        if (k === "phase") out.phase = phase;
+        else if (cols[k]) out[k] = ctx.column(cols[k]!, STATE_FIELDS[k]!);
+      }
+      Object.assign(out, identity(d));
+      if (groups.size > 0) {
+        out.notes = [...groups.values()]
+          .map((g) => (g.count === n ? g.text : `${g.text} (${g.count} of ${n} points${/\d/.test(g.text) ? ", first shown" : ""})`))
+          .join("; ");
+      }
+      return out;
+    },
+  };
+}
+
+/** Rows -> a record of columns (see columnCollector). */
+export function columnsOf(rows: Row[], d: ModelData, ctx: BuiltinContext): Record<string, unknown> {
+  const c = columnCollector(rows.length);
+  rows.forEach((r, i) => c.add(i, r));
+  return c.finish(d, ctx);
 }

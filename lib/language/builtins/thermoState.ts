@@ -8,7 +8,7 @@ import { modelDataOf, type ModelData } from "../values/thermo.js";
 import { ArgumentError } from "./bind.js";
 import { defineBuiltin, type BuiltinContext, type BuiltinDef } from "./define.js";
 import { guard, isVectorArg, lengthOf, pick, requireAllAbove0, siArg } from "./thermoArgs.js";
-import { STATE_FIELDS, columnsOf, eosRowAt, identity, recordOf, rowOf } from "./thermoRows.js";
+import { STATE_FIELDS, columnCollector, eosRowAt, identity, recordOf, rowOf } from "./thermoRows.js";
 import { waterAt, waterFromSpec, type Row } from "./water.js";
 
 const PHASES = ["stable", "liquid", "vapor", "vapour"];
@@ -30,12 +30,12 @@ function evaluate(d: ModelData, inputs: Record<string, number | Float64Array>, p
   const n = lengthOf(fn, inputs);
   const args: Record<string, number> = {};
   if (n === undefined) return recordOf(point(pick(inputs, 0, args)), d, ctx);
-  const rows = new Array<Row>(n);
+  const collect = columnCollector(n);
   for (let i = 0; i < n; i++) {
     if ((i & 255) === 0 && ctx.shouldStop()) throw ctx.interrupted();
-    rows[i] = point(pick(inputs, i, args));
+    collect.add(i, point(pick(inputs, i, args)));
   }
-  return columnsOf(rows, d, ctx);
+  return collect.finish(d, ctx);
 }
 
 /** A two-property spec in SI: molar keys for equations of state (v, rho, h, s, u via M). */
