@@ -4,8 +4,8 @@
  *
  * RENDERING CONTRACT (kernel engine and language engineers, please follow):
  * - Everything the language calls here is SYNCHRONOUS: tableBundle, chartBundle, departureChart,
- *   zChart, checkBundle, ProgressiveChart. A chart bundle leaves the language with text/plain and
- *   the Vega-Lite spec only.
+ *   zChart, checkBundle, ProgressiveChart, ProgressiveDisplay. A chart bundle leaves the language
+ *   with text/plain and the Vega-Lite spec only.
  * - vega renders asynchronously (View.toSVG returns a promise; its dataflow is async all the way
  *   down), so the SVG and PNG cannot be made inside the synchronous Session.run. Instead the engine
  *   calls `await renderPending(bundle)` on EVERY bundle before sending it (execute_result,
@@ -13,6 +13,9 @@
  *   bundle with the Vega-Lite type but no SVG is "pending") and returns any other bundle as is.
  *   Bundles stay plain JSON, so this works on either side of the worker boundary; do it in the
  *   worker (after run() returns / as the sink receives displays) to keep the main thread free.
+ * - Progress displays of a running sweep (progressive.ts) are NOT pending: they carry a placeholder
+ *   SVG (a frame with "in progress: n of N points") beside the Vega-Lite spec, so the engine sends
+ *   them while the cell still runs; the final update carries a normal pending chart bundle.
  * - vega, vega-lite and resvg are loaded by dynamic import on the first render: importing this
  *   index costs nothing at kernel start. The first chart pays about 0.3 s for loading.
  * - The PNG's text uses DejaVu Sans from the dejavu-fonts-ttf package, loaded by path with system
@@ -37,7 +40,11 @@ export {
   type ReducedCurve, type DepartureProperty, type ReducedChartOptions,
 } from "./reduced.js";
 export { checkBundle, checkRecord, evaluateCheck, type CheckInput, type CheckRecord, type CheckComparison } from "./check.js";
-export { ProgressiveChart, newDisplayId, type DisplayTarget, type ProgressiveOptions } from "./progressive.js";
+export {
+  ProgressiveChart, ProgressiveDisplay, newDisplayId, placeholderSvg, partialChartBundle, progressText,
+  DEFAULT_START_AFTER_MS, DEFAULT_MIN_INTERVAL_MS,
+  type DisplayTarget, type ProgressiveOptions, type ProgressTiming, type Progress,
+} from "./progressive.js";
 export {
   renderPending, renderChart, renderSvg, renderPng, compileVegaLite, isPending, chartFontFiles,
   type RenderOptions, type RenderedChart,
