@@ -7,8 +7,8 @@ import { departure as thermoDeparture, maxwellResidual, stateFrom, type Spec } f
 import { modelDataOf, type ModelData } from "../values/thermo.js";
 import { ArgumentError } from "./bind.js";
 import { defineBuiltin, type BuiltinContext, type BuiltinDef } from "./define.js";
-import { guard, isVectorArg, lengthOf, pick, requireAllAbove0, siArg } from "./thermoArgs.js";
-import { STATE_FIELDS, columnCollector, eosRowAt, identity, recordOf, rowOf } from "./thermoRows.js";
+import { guard, lengthOf, pick, requireAllAbove0, siArg } from "./thermoArgs.js";
+import { columnCollector, eosRowAt, recordOf, rowOf } from "./thermoRows.js";
 import { waterAt, waterFromSpec, type Row } from "./water.js";
 
 const PHASES = ["stable", "liquid", "vapor", "vapour"];
@@ -192,4 +192,3 @@ export const thermoState: BuiltinDef[] = [
   }),
 ];
 
-export { STATE_FIELDS, identity, isVectorArg };
