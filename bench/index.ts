@@ -3,7 +3,7 @@
  * Benchmarks measure (rates, ratios against a reference in the same run); they never assert.
  * Run one alone: `node dist/bench/<name>.js`.
  */
-const BENCHES = ["numerics", "thermo", "water", "language", "display", "runner"] as const;
+const BENCHES = ["numerics", "thermo", "water", "language", "language_thermo", "display", "runner"] as const;
 
 async function main(): Promise<void> {
   const only = process.argv.slice(2);
