@@ -6,6 +6,9 @@
  *   "loop"          busy loop polling shouldStop (cooperative interrupt)
  *   "spin"          busy loop that never polls (needs the hard interrupt)
  *   "fail"          an error result           "throw"      throws (engine fault path)
+ *   "announce TEXT" writes TEXT, then loops polling shouldStop (outputs must reach the host mid-cell)
+ *   "chart"         displays a Vega-Lite bundle without its SVG (pending), then writes "after"
+ *   "uncloneable"   returns a value holding a function (cannot cross a worker boundary)
  */
 import type { CellSink, RunResult, Session, SessionOptions } from "../../lib/language/index.js";
 
@@ -44,6 +47,17 @@ export function createSession(options: SessionOptions): Session {
       }
       return { ok: true };
     }
+    if ((m = /^announce (.*)$/s.exec(code))) {
+      sink.stdout(m[1]! + "\n");
+      for (;;) if (options.shouldStop()) return err("Interrupted", "stopped by the user");
+    }
+    if (code === "chart") {
+      const spec = { $schema: "https://vega.github.io/schema/vega-lite/v5.json", data: { values: [{ x: 1, y: 2 }, { x: 2, y: 3 }] }, mark: "line", encoding: { x: { field: "x", type: "quantitative" }, y: { field: "y", type: "quantitative" } } };
+      sink.display({ "text/plain": "a chart", "application/vnd.vegalite.v5+json": spec });
+      sink.stdout("after\n");
+      return { ok: true };
+    }
+    if (code === "uncloneable") return { ok: true, result: { "text/plain": "x", hook: () => 1 } };
     if (code === "fail") return err("ValueError", "asked to fail");
     if (code === "throw") throw new Error("session fault");
     if (code.trim() === "") return { ok: true };
