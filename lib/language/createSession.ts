@@ -12,6 +12,7 @@ import { createRestrictedMath, DISABLED_NAMES } from "./mathInstance.js";
 import { installUnits } from "../units/index.js";
 import { createUnitsBridge, type UnitsBridge } from "./unitsBridge.js";
 import { createColumnFactory } from "./values/column.js";
+import { isRichValue } from "./values/rich.js";
 import { createFormatter } from "./format.js";
 import { scanCell, positionOf } from "./statements.js";
 import { LanguageError, translateError } from "./errors.js";
@@ -68,12 +69,17 @@ export function createSessionWithInternals(
   const column = createColumnFactory(math);
   const formatter = createFormatter(math, units);
   const scope = new Map<string, unknown>();
+  // Display ids shown in the current cell: a value carrying one was already shown (progressive output).
+  const shownIds = new Set<string>();
 
   ctx = {
     shouldStop: options.shouldStop,
     interrupted: () => new Interrupted(),
     stdout: (t) => sink.stdout(t),
-    display: (b, o) => sink.display(b, o),
+    display: (b, o) => {
+      if (o?.displayId !== undefined && sink !== SILENT_SINK) shownIds.add(o.displayId);
+      sink.display(b, o);
+    },
     clear: (wait) => sink.clear(wait),
     bundleOf: (v) => formatter.bundle(v),
     textOf: (v) => formatter.text(v),
@@ -82,6 +88,7 @@ export function createSessionWithInternals(
     column: (si, dimOrUnit, displayUnit) => {
       return column(si, units.siUnitOf(dimOrUnit), displayUnit ?? units.displayUnitFor(si, dimOrUnit));
     },
+    progress: options.progress,
     call: (fn, ...args) => {
       if (typeof fn !== "function") throw new Error(`expected a function, got ${formatter.text(fn)}`);
       return (fn as (...a: unknown[]) => unknown)(...args);
@@ -111,6 +118,7 @@ export function createSessionWithInternals(
 
   const run = (code: string, cellSink: CellSink): RunResult => {
     sink = cellSink;
+    shownIds.clear();
     let pending: MimeBundle | undefined;
     const flush = () => {
       if (pending) sink.display(pending);
@@ -140,7 +148,10 @@ export function createSessionWithInternals(
         } catch (err) {
           throw translateError(err, code, st.start, st.text, knownNames);
         }
-        if (st.hidden || value === undefined) continue;
+        // A chart its built-in already showed in this cell (progressive output) is not shown twice;
+        // the first statement that yields it uses the mark up, so a later `x` shows it again.
+        const alreadyShown = isRichValue(value) && value.displayId !== undefined && shownIds.delete(value.displayId);
+        if (st.hidden || value === undefined || alreadyShown) continue;
         flush();
         pending = formatter.bundle(value);
         // `x = 5 bar` shows as "x = 5 bar": the name tells which line a value came from.

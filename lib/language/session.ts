@@ -3,7 +3,7 @@
  * creates one Session per kernel lifetime and calls it synchronously; the Session never sees Jupyter
  * messages: it writes text and rich displays to a CellSink and returns a result bundle or an error.
  */
-import type { MimeBundle } from "../display/index.js";
+import type { MimeBundle, ProgressTiming } from "../display/index.js";
 
 export interface CellSink {
   /** Text for the stdout stream (echo). */
@@ -28,6 +28,11 @@ export type RunResult =
 export interface SessionOptions {
   /** Polled by the statement loop and every numerics loop; true means the user asked to stop. */
   shouldStop: () => boolean;
+  /**
+   * When long sweeps (departure_chart, zchart) start showing a progress display and how often they
+   * update it; a clock can be injected for tests. Defaults: after 0.5 s, at most every 0.5 s.
+   */
+  progress?: ProgressTiming;
 }
 
 export interface CompletionResult {

@@ -11,10 +11,14 @@
  * - Pure fluid below Tc with the stable phase: the curve follows the lowest-Gibbs root, and the
  *   saturation pressure (equal fugacity, lib/thermo psat) is inserted with both saturated phases so
  *   the step is drawn exactly there, as on printed generalized charts.
+ * - A sweep that runs longer than about 0.5 s shows a progress display (lib/display
+ *   ProgressiveDisplay: the curves so far, a placeholder picture saying how far it has come), updated
+ *   at most every 0.5 s and replaced by the finished chart at the end. The returned chart then
+ *   carries that display id, so the session does not print it a second time as the cell's result.
  * The thermodynamics is lib/thermo's departure(); lib/display lays the curves out.
  */
 import {
-  DEPARTURE_TITLES, departureChart, shortNumber, zChart,
+  DEPARTURE_TITLES, ProgressiveDisplay, departureChart, newDisplayId, shortNumber, zChart,
   type DepartureProperty, type MimeBundle, type ReducedCurve,
 } from "../../display/index.js";
 import { R, ThermoError, departure, psat, type EosModel, type Residual } from "../../thermo/index.js";
@@ -150,8 +154,11 @@ function groupOf(p: ChartOptions["property"], r: Residual, T: number, Tc: number
   }
 }
 
+/** Called after every sweep point: points done of total, and the curves so far (the last may be partial). */
+type OnPoint = (done: number, total: number, curvesSoFar: () => ReducedCurve[]) => void;
+
 /** All curves of the chart and the notes that explain what was left out or assumed. */
-function computeCurves(fn: string, entries: Entry[], o: ChartOptions, ctx: BuiltinContext): { curves: ReducedCurve[]; notes: string[] } {
+function computeCurves(fn: string, entries: Entry[], o: ChartOptions, ctx: BuiltinContext, onPoint?: OnPoint): { curves: ReducedCurve[]; notes: string[] } {
   const total = entries.length * o.Tr.length * o.Pr.length;
   if (total > MAX_POINTS) {
     throw new ArgumentError(`${fn}(): ${entries.length} model(s) x ${o.Tr.length} Tr x ${o.Pr.length} Pr = ${total} points, more than ${MAX_POINTS}; use fewer Tr or Pr values`);
@@ -161,6 +168,7 @@ function computeCurves(fn: string, entries: Entry[], o: ChartOptions, ctx: Built
   let nearCritical = false;
   let stepDrawn = false;
   let subcritical = false;
+  let done = 0;
   for (const e of entries) {
     if (o.route === "integrate" && typeof e.eos.pressure !== "function") {
       throw new ArgumentError(`option route "integrate" of ${fn}() needs a pressure-explicit model P(T, V); ${e.label} has none (use route "closed")`);
@@ -182,6 +190,7 @@ function computeCurves(fn: string, entries: Entry[], o: ChartOptions, ctx: Built
           values.push(v);
         }
       };
+      const soFar = () => (Pr.length === 0 ? curves : [...curves, { Tr: tr, ...(entries.length > 1 ? { model: e.label } : {}), Pr, values }]);
       let sat: { pr: number; liquid: Residual; vapor: Residual } | undefined;
       if (pure && o.phase === "stable" && tr < 1) {
         subcritical = true;
@@ -195,6 +204,8 @@ function computeCurves(fn: string, entries: Entry[], o: ChartOptions, ctx: Built
       }
       for (const pr of o.Pr) {
         if (ctx.shouldStop()) throw ctx.interrupted();
+        if (onPoint && done > 0) onPoint(done, total, soFar);
+        done++;
         if (sat && pr > sat.pr) {
           add(sat.pr, sat.vapor);
           add(sat.pr, sat.liquid);
@@ -246,17 +257,36 @@ function subtitleOf(entries: Entry[], o: ChartOptions): string {
   return `${models}${fluids.join(" | ")}${crit}${phase}${route}`;
 }
 
-function chartValue(bundle: MimeBundle): RichValue {
-  return { kind: "chart", toBundle: () => bundle, toText: () => String(bundle["text/plain"]) };
+/** displayId: the chart was already shown progressively under this id (the session will not repeat it). */
+function chartValue(bundle: MimeBundle, displayId?: string): RichValue {
+  return { kind: "chart", toBundle: () => bundle, toText: () => String(bundle["text/plain"]), ...(displayId === undefined ? {} : { displayId }) };
 }
 
 function build(fn: string, args: unknown[], withProperty: boolean, ctx: BuiltinContext): RichValue {
   const { entries, options } = splitArgs(fn, args, ctx);
   const o = readOptions(fn, options, withProperty, ctx);
-  const { curves, notes } = computeCurves(fn, entries, o, ctx);
-  const layout = { title: o.title, subtitle: subtitleOf(entries, o), logPr: o.log, notes };
-  const bundle = o.property === "Z" ? zChart(curves, layout) : departureChart(o.property, curves, layout);
-  return chartValue(bundle);
+  const subtitle = subtitleOf(entries, o);
+  const draw = (curves: ReducedCurve[], notes: string[]) => {
+    const layout = { title: o.title, subtitle, logPr: o.log, notes };
+    return o.property === "Z" ? zChart(curves, layout) : departureChart(o.property, curves, layout);
+  };
+  const progress = new ProgressiveDisplay(ctx, { ...ctx.progress, displayId: newDisplayId(fn) });
+  let result: { curves: ReducedCurve[]; notes: string[] };
+  try {
+    // The partial chart is drawn only when an update is due (at most every 0.5 s by default).
+    result = computeCurves(fn, entries, o, ctx, (done, total, soFar) => {
+      progress.offer({ done, total }, () => {
+        const curves = soFar();
+        return curves.length > 0 ? draw(curves, []) : undefined;
+      });
+    });
+  } catch (err) {
+    const reason = err instanceof Error ? (err.name === "Interrupted" ? "interrupted" : err.message.split("\n")[0]!) : String(err);
+    progress.abandon(reason);
+    throw err;
+  }
+  const { bundle, displayId } = progress.finish(draw(result.curves, result.notes));
+  return chartValue(bundle, displayId);
 }
 
 const MODELS_DOC = 'one or more models (pr("methane"), srk("methane"), ...), or a record {label: model}; an options record may follow last';

@@ -54,7 +54,7 @@
  * 7. Every entry of `examples` is executed by tests/lib/language/builtins/examples.test.ts: keep them
  *    self-contained and fast.
  */
-import type { MimeBundle } from "../../display/index.js";
+import type { MimeBundle, ProgressTiming } from "../../display/index.js";
 import type { UnitsBridge } from "../unitsBridge.js";
 import type { QuantityColumn } from "../values/column.js";
 
@@ -97,6 +97,12 @@ export interface BuiltinContext {
   column(si: Float64Array, dimOrUnit: string, displayUnit?: string): QuantityColumn;
   /** Calls a language function with language values. */
   call(fn: unknown, ...args: unknown[]): unknown;
+  /**
+   * Timing of progress displays for long work (the session's SessionOptions.progress). A built-in
+   * that showed its result progressively under a display id returns a RichValue carrying that
+   * displayId, and the session does not show it a second time as the statement's value.
+   */
+  progress?: ProgressTiming;
 }
 
 export type BuiltinArgs = Record<string, any>;

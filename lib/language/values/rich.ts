@@ -13,6 +13,13 @@ export interface RichValue {
   toText(): string;
   /** Field names offered by completion after `value.` (records use their own keys). */
   fields?(): string[];
+  /**
+   * Set when the built-in that made this value already showed it, as the display with this id
+   * (progressive output of a long sweep). The session then leaves it out as the value of the
+   * statement that produced it in that cell; later it shows like any other value (show(x), or x
+   * as a cell's last line).
+   */
+  readonly displayId?: string;
 }
 
 export function isRichValue(x: unknown): x is RichValue {

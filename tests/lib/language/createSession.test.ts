@@ -2,6 +2,7 @@ import { describe, expect, it } from "vitest";
 import { createSession } from "../../../lib/language/index.js";
 import { createSessionWithInternals } from "../../../lib/language/createSession.js";
 import type { MimeBundle } from "../../../lib/display/index.js";
+import { defineBuiltin } from "../../../lib/language/builtins/define.js";
 
 function capture() {
   const out: string[] = [];
@@ -40,13 +41,14 @@ describe("run", () => {
   });
   it("run reports line, column and a caret under an unknown name, with suggestions", () => {
     const s = createSession({ shouldStop: () => false });
-    s.run("pressure1 = 3 bar", capture().sink);
-    const r = s.run("x = 1\ny = 2 *  pressur1", capture().sink);
+    // A name no built-in resembles (the thermo group registers pressure(), which is one edit from "pressur1").
+    s.run("dpline1 = 3 bar", capture().sink);
+    const r = s.run("x = 1\ny = 2 *  dplne1", capture().sink);
     expect(r.ok).toBe(false);
     if (r.ok) return;
     expect(r.error.ename).toBe("NameError");
-    expect(r.error.evalue).toBe('unknown name "pressur1"; did you mean "pressure1"? (line 2, column 10)');
-    expect(r.error.traceback.slice(-2)).toEqual(["    y = 2 *  pressur1", "             ^^^^^^^^"]);
+    expect(r.error.evalue).toBe('unknown name "dplne1"; did you mean "dpline1"? (line 2, column 10)');
+    expect(r.error.traceback.slice(-2)).toEqual(["    y = 2 *  dplne1", "             ^^^^^^"]);
   });
   it("run points a syntax error at its column on the right line", () => {
     const r = createSession({ shouldStop: () => false }).run("a = 1\nb = (2 + * 3)", capture().sink);
@@ -77,5 +79,35 @@ describe("evaluateExpression", () => {
     const s = createSession({ shouldStop: () => false });
     s.run("q = 5", capture().sink);
     expect(text(s.evaluateExpression("q * 2"))).toBe("10");
+  });
+});
+
+describe("run with values already shown", () => {
+  // A built-in that shows its result under a display id and returns it marked with that id, as the
+  // progressive charts do after a long sweep.
+  const shownOnce = defineBuiltin({
+    name: "shown_once", group: "test", params: [], returns: "any", doc: "test", examples: ["shown_once()"],
+    impl: (_a, ctx) => {
+      const bundle = { "text/plain": "the chart" };
+      ctx.display(bundle, { displayId: "d-1" });
+      return { kind: "chart", toBundle: () => bundle, toText: () => "the chart", displayId: "d-1" };
+    },
+  });
+  it("run leaves out a value its built-in already showed, once per cell; later cells and show() repeat it", () => {
+    const { session } = createSessionWithInternals({ shouldStop: () => false }, [shownOnce]);
+    const c = capture();
+    const r = session.run("x = shown_once()", c.sink);
+    expect(c.shown).toEqual(["the chart"]);
+    expect(r).toEqual({ ok: true });
+    expect(text(session.run("x", c.sink))).toBe("the chart");
+    const d = capture();
+    expect(text(session.run("show(x); 2", d.sink))).toBe("2");
+    expect(d.shown).toEqual(["the chart"]);
+    // Same cell: the producing statement is skipped, a later line naming the value shows it.
+    expect(text(session.run("y = shown_once()\ny", capture().sink))).toBe("the chart");
+  });
+  it("evaluateExpression returns the value: nothing was shown to a user", () => {
+    const { session } = createSessionWithInternals({ shouldStop: () => false }, [shownOnce]);
+    expect(text(session.evaluateExpression("shown_once()"))).toBe("the chart");
   });
 });

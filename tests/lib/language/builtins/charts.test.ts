@@ -7,11 +7,13 @@
  * beside each value.
  */
 import { describe, expect, it } from "vitest";
-import { MIME, renderPending, type MimeBundle } from "../../../../lib/display/index.js";
+import { MIME, isPending, renderPending, type MimeBundle } from "../../../../lib/display/index.js";
 import { createSession } from "../../../../lib/language/index.js";
+import { InProcessEngine, type EngineOutput } from "../../../../kernel/engine/index.js";
 
 function run(code: string) {
-  const session = createSession({ shouldStop: () => false });
+  // A clock that never moves: no progress display, however slow the machine, so the chart is the result.
+  const session = createSession({ shouldStop: () => false, progress: { now: () => 0 } });
   const out: string[] = [];
   const r = session.run(code, { stdout: (t) => out.push(t), display() {}, clear() {} });
   return { result: r.ok ? r.result : undefined, error: r.ok ? undefined : r.error.evalue, out: out.join("") };
@@ -216,5 +218,112 @@ describe("chart built-in errors", () => {
     const r = run(`zchart([pr(${W02}), srk(${W02})], {Tr: [1.5], Pr: [1]})`);
     if (r.error !== undefined) expect(r.error).toMatch(/models\[1\]\[1\] of zchart\(\).*pass models as separate arguments/);
     else expect(new Set((r.result![MIME.vegalite] as unknown as Spec).data.values.map((v) => v.style)).size).toBe(2);
+  });
+});
+
+/** A clock that moves `step` ms each time it is read: progress timing without real time. */
+const steppingClock = (step: number) => {
+  let t = 0;
+  return () => (t += step);
+};
+
+type Shown = { bundle: MimeBundle; options?: { displayId?: string; update?: boolean } };
+
+function runProgressive(code: string, opts: { step?: number; startAfter?: number; minInterval?: number; stopAfter?: number } = {}) {
+  let polls = 0;
+  const session = createSession({
+    shouldStop: () => opts.stopAfter !== undefined && ++polls > opts.stopAfter,
+    progress: { now: steppingClock(opts.step ?? 10), startAfter: opts.startAfter ?? 50, minInterval: opts.minInterval ?? 100 },
+  });
+  const shown: Shown[] = [];
+  const r = session.run(code, { stdout() {}, display: (bundle, options) => shown.push({ bundle, options }), clear() {} });
+  return { r, shown, session };
+}
+
+// 1 model x 3 Tr x 20 Pr = 60 points, all above Tc (no saturation step points).
+const SWEEP = `zchart(pr(${W02}), {Tr: [1.2, 1.5, 2], Pr: span(0.1, 5, 20)})`;
+
+describe("progressive charts", () => {
+  it("zchart: a long sweep shows partial charts under one display id, then the final chart replaces them", () => {
+    const { r, shown } = runProgressive(SWEEP);
+    expect(r.ok).toBe(true);
+    // Clock: 10 ms per read, one read at the start and one per point after the first. First partial
+    // when 50 ms have passed (after point 5), then every 100 ms (10 points): 5, 15, 25, 35, 45, 55.
+    const partials = shown.slice(0, -1);
+    expect(partials.map((s) => String(s.bundle[MIME.text]).match(/\(in progress: (\d+) of 60 points\)$/)?.[1])).toEqual(["5", "15", "25", "35", "45", "55"]);
+    const id = shown[0]!.options!.displayId!;
+    expect(id).toMatch(/^zchart-/);
+    expect(shown[0]!.options).toEqual({ displayId: id });
+    for (const s of shown.slice(1)) expect(s.options).toEqual({ displayId: id, update: true });
+    for (const p of partials) {
+      // Not pending: the engine sends it while the cell runs. The Vega-Lite spec holds the points so far.
+      expect(isPending(p.bundle)).toBe(false);
+      expect(String(p.bundle[MIME.svg])).toMatch(/^<svg[^>]*>.*in progress: \d+ of 60 points.*<\/svg>$/);
+      const n = Number(String(p.bundle[MIME.text]).match(/in progress: (\d+)/)![1]);
+      expect((p.bundle[MIME.vegalite] as Spec).data.values).toHaveLength(n);
+    }
+    const final = shown.at(-1)!.bundle;
+    expect(isPending(final)).toBe(true); // rendered by the engine like any chart
+    expect(String(final[MIME.text])).not.toContain("in progress");
+    expect((final[MIME.vegalite] as Spec).data.values).toHaveLength(60);
+    // The same chart as a quick run returns as its result, and it is not printed a second time.
+    expect(final).toEqual(run(SWEEP).result);
+    expect(r.ok && r.result).toBeUndefined();
+  });
+  it("zchart: a quick sweep shows nothing on the way; the chart is the cell's result", () => {
+    const { r, shown } = runProgressive(SWEEP, { step: 0 });
+    expect(shown).toHaveLength(0);
+    expect(r.ok && r.result?.[MIME.vegalite]).toBeDefined();
+  });
+  it("departure_chart: partial charts include the curve in progress", () => {
+    const { shown } = runProgressive(`departure_chart(pr(${W02}), {Tr: [1.5, 2], Pr: span(0.1, 5, 30)})`, { startAfter: 0, minInterval: 100 });
+    // First read at the start, first partial after point 1 (startAfter 0), the next 10 points later.
+    const rows = (shown[1]!.bundle[MIME.vegalite] as Spec).data.values;
+    expect(rows).toHaveLength(11);
+    expect(new Set(rows.map((x) => x.series))).toEqual(new Set(["Tr = 1.5"]));
+    expect((shown[3]!.bundle[MIME.vegalite] as Spec).data.values.filter((x) => x.series === "Tr = 2")).toHaveLength(1);
+  });
+  it("zchart: an assigned chart that was shown progressively is not repeated, and shows again later", () => {
+    const { r, shown, session } = runProgressive(`c = ${SWEEP}`);
+    expect(r.ok && r.result).toBeUndefined();
+    const final = shown.at(-1)!.bundle;
+    const again = session.run("c", { stdout() {}, display() {}, clear() {} });
+    expect(again.ok && again.result).toEqual(final);
+    const shownAgain: Shown[] = [];
+    session.run("show(c); 1", { stdout() {}, display: (bundle, options) => shownAgain.push({ bundle, options }), clear() {} });
+    expect(shownAgain).toEqual([{ bundle: final, options: undefined }]);
+    // In the cell that made it, a later line naming it shows it: only the producing statement is skipped.
+    const { r: r2, shown: shown2 } = runProgressive(`c = ${SWEEP}\nc`);
+    expect(r2.ok && r2.result).toEqual(shown2.at(-1)!.bundle);
+  });
+  it("zchart: an interrupted sweep leaves its display marked stopped, not in progress", () => {
+    const { r, shown } = runProgressive(SWEEP, { stopAfter: 30 });
+    expect(r.ok ? "" : r.error.evalue).toMatch(/interrupted/);
+    const last = shown.at(-1)!;
+    expect(last.options?.update).toBe(true);
+    expect(String(last.bundle[MIME.text])).toMatch(/\(stopped: \d+ of 60 points: interrupted\)$/);
+    expect(String(last.bundle[MIME.svg])).toContain("stopped:");
+    expect(isPending(last.bundle)).toBe(false);
+  });
+  it("zchart through the in-process engine: partials carry the placeholder, the final update a real SVG and PNG, no result", async () => {
+    const engine = await InProcessEngine.create((o) => createSession({ ...o, progress: { now: steppingClock(10), startAfter: 50, minInterval: 100 } }));
+    const outputs: EngineOutput[] = [];
+    const r = await engine.execute(SWEEP, (o) => outputs.push(o));
+    await engine.shutdown();
+    expect(r.ok && r.result).toBeUndefined();
+    const displays = outputs.filter((o): o is Extract<EngineOutput, { kind: "display" }> => o.kind === "display");
+    expect(displays).toHaveLength(outputs.length);
+    expect(displays.length).toBeGreaterThan(1);
+    const id = displays[0]!.displayId;
+    expect(displays.every((d) => d.displayId === id)).toBe(true);
+    expect(displays.map((d) => d.update ?? false)).toEqual([false, ...displays.slice(1).map(() => true)]);
+    for (const d of displays.slice(0, -1)) expect(String(d.bundle[MIME.svg])).toContain("in progress");
+    const final = displays.at(-1)!.bundle;
+    const svg = String(final[MIME.svg]);
+    expect(svg.startsWith("<svg")).toBe(true);
+    expect(svg).not.toContain("in progress");
+    expect(svg).toContain("Z = PV/(RT)");
+    expect(svg).toContain("reduced pressure Pr = P/Pc");
+    expect(final[MIME.png]).toBeDefined();
   });
 });
