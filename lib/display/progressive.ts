@@ -18,6 +18,7 @@
 import { chartBundle, type ChartSpec, type Series } from "./chart.js";
 import { escapeHtml } from "./format.js";
 import { MIME, type MimeBundle } from "./mime.js";
+import { isPending } from "./render.js";
 import { CHART_BACKGROUND, CHART_FONT } from "./style.js";
 
 export interface DisplayTarget {
@@ -151,12 +152,20 @@ export class ProgressiveDisplay {
 
   /**
    * Ends the work. When a partial display was shown, it is replaced by `final` (sent as an update)
-   * and the display id is returned; otherwise nothing is sent.
+   * and the display id is returned; otherwise nothing is sent. A final chart still needing its
+   * pictures is announced first by a partial saying the work is done and the picture is being
+   * drawn: the engine draws it only after the cell returns, which takes seconds for big charts,
+   * and the last "in progress" count should not stand meanwhile.
    */
   finish(final: MimeBundle): { bundle: MimeBundle; displayId?: string } {
     if (this.closed) throw new Error("progressive display: finish() called twice");
     this.closed = true;
     if (!this.isShown) return { bundle: final };
+    if (isPending(final)) {
+      const p = this.last?.progress;
+      const count = p ? `${p.total ?? p.done} ${p.unit ?? "points"}` : "all points";
+      this.send(partialChartBundle(final, `computed ${count}; drawing the chart`));
+    }
     this.send(final);
     return { bundle: final, displayId: this.displayId };
   }

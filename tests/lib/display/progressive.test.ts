@@ -79,11 +79,16 @@ describe("ProgressiveDisplay", () => {
     const final = smallChart();
     const out = d.finish(final);
     expect(out).toEqual({ bundle: final, displayId: "d1" });
-    expect(calls.map((c) => c.options)).toEqual([{ displayId: "d1" }, { displayId: "d1", update: true }, { displayId: "d1", update: true }]);
+    const update = { displayId: "d1", update: true };
+    expect(calls.map((c) => c.options)).toEqual([{ displayId: "d1" }, update, update, update]);
     expect(String(calls[0]!.bundle[MIME.svg])).toContain("in progress: 2 of 10 points");
     expect(String(calls[1]!.bundle[MIME.svg])).toContain("in progress: 4 of 10 points");
-    expect(calls[2]!.bundle).toBe(final);
-    expect(isPending(calls[2]!.bundle)).toBe(true); // the engine renders the final picture
+    // While the engine draws the final picture, the display says the work is done.
+    expect(String(calls[2]!.bundle[MIME.svg])).toContain("computed 10 points; drawing the chart");
+    expect(calls[2]!.bundle[MIME.vegalite]).toBe(final[MIME.vegalite]);
+    expect(isPending(calls[2]!.bundle)).toBe(false);
+    expect(calls[3]!.bundle).toBe(final);
+    expect(isPending(calls[3]!.bundle)).toBe(true); // the engine renders the final picture
     expect(() => d.offer({ done: 5 }, build)).toThrow(/after finish/);
     expect(() => d.finish(final)).toThrow(/twice/);
   });
@@ -142,12 +147,24 @@ describe("ProgressiveChart", () => {
     p.add(1, 1, 0.995); // within the interval: no update
     const { bundle: final, displayId } = p.finish();
     expect(displayId).toBe(p.displayId);
-    expect(calls.map((c) => c.options)).toEqual([{ displayId: p.displayId }, { displayId: p.displayId, update: true }]);
+    const update = { displayId: p.displayId, update: true };
+    expect(calls.map((c) => c.options)).toEqual([{ displayId: p.displayId }, update, update]);
     expect(calls[0]!.bundle[MIME.text]).toContain("(in progress: 2 of 4 points)");
     expect(calls[0]!.bundle[MIME.text]).toContain("300 K: 2 points");
     expect(final[MIME.text]).not.toContain("in progress");
     expect(final[MIME.text]).toContain("400 K: 1 points");
-    expect(calls[1]!.bundle).toBe(final);
+    expect(calls[1]!.bundle[MIME.text]).toContain("(computed 4 points; drawing the chart)");
+    expect(calls[2]!.bundle).toBe(final);
+  });
+  it("ProgressiveDisplay.finish with a bundle that needs no picture sends it alone", () => {
+    let t = 0;
+    const { calls, target } = recorder();
+    const d = new ProgressiveDisplay(target, { now: () => t, startAfter: 0, minInterval: 0 });
+    t = 1;
+    d.offer({ done: 1 }, smallChart);
+    const done = { [MIME.text]: "a table" };
+    d.finish(done);
+    expect(calls.map((c) => c.bundle)).toEqual([expect.anything(), done]);
   });
   it("ProgressiveChart refuses unknown series and use after finish", () => {
     const { target } = recorder();

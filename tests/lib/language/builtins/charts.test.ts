@@ -249,7 +249,7 @@ describe("progressive charts", () => {
     expect(r.ok).toBe(true);
     // Clock: 10 ms per read, one read at the start and one per point after the first. First partial
     // when 50 ms have passed (after point 5), then every 100 ms (10 points): 5, 15, 25, 35, 45, 55.
-    const partials = shown.slice(0, -1);
+    const partials = shown.slice(0, -2);
     expect(partials.map((s) => String(s.bundle[MIME.text]).match(/\(in progress: (\d+) of 60 points\)$/)?.[1])).toEqual(["5", "15", "25", "35", "45", "55"]);
     const id = shown[0]!.options!.displayId!;
     expect(id).toMatch(/^zchart-/);
@@ -262,6 +262,11 @@ describe("progressive charts", () => {
       const n = Number(String(p.bundle[MIME.text]).match(/in progress: (\d+)/)![1]);
       expect((p.bundle[MIME.vegalite] as Spec).data.values).toHaveLength(n);
     }
+    // Then "computed, drawing" (the engine draws the final picture after the cell returns), then the chart.
+    const drawing = shown.at(-2)!.bundle;
+    expect(String(drawing[MIME.text])).toMatch(/\(computed 60 points; drawing the chart\)$/);
+    expect(isPending(drawing)).toBe(false);
+    expect((drawing[MIME.vegalite] as Spec).data.values).toHaveLength(60);
     const final = shown.at(-1)!.bundle;
     expect(isPending(final)).toBe(true); // rendered by the engine like any chart
     expect(String(final[MIME.text])).not.toContain("in progress");
@@ -317,7 +322,8 @@ describe("progressive charts", () => {
     const id = displays[0]!.displayId;
     expect(displays.every((d) => d.displayId === id)).toBe(true);
     expect(displays.map((d) => d.update ?? false)).toEqual([false, ...displays.slice(1).map(() => true)]);
-    for (const d of displays.slice(0, -1)) expect(String(d.bundle[MIME.svg])).toContain("in progress");
+    for (const d of displays.slice(0, -2)) expect(String(d.bundle[MIME.svg])).toContain("in progress");
+    expect(String(displays.at(-2)!.bundle[MIME.svg])).toContain("computed 60 points; drawing the chart");
     const final = displays.at(-1)!.bundle;
     const svg = String(final[MIME.svg]);
     expect(svg.startsWith("<svg")).toBe(true);
