@@ -71,6 +71,9 @@ export function createSessionWithInternals(
   const scope = new Map<string, unknown>();
   // Display ids shown in the current cell: a value carrying one was already shown (progressive output).
   const shownIds = new Set<string>();
+  // Shows the previous statement's value before a display made by a later statement (show, progress
+  // displays), so outputs appear in the order the statements ran.
+  let flushPending = () => {};
 
   ctx = {
     shouldStop: options.shouldStop,
@@ -78,6 +81,7 @@ export function createSessionWithInternals(
     stdout: (t) => sink.stdout(t),
     display: (b, o) => {
       if (o?.displayId !== undefined && sink !== SILENT_SINK) shownIds.add(o.displayId);
+      if (!o?.update) flushPending();
       sink.display(b, o);
     },
     clear: (wait) => sink.clear(wait),
@@ -124,6 +128,7 @@ export function createSessionWithInternals(
       if (pending) sink.display(pending);
       pending = undefined;
     };
+    flushPending = flush;
     const scan = scanCell(code);
     try {
       if (scan.maxDepth > MAX_NESTING) {
@@ -165,6 +170,7 @@ export function createSessionWithInternals(
       const le = err instanceof LanguageError ? err : translateError(err, code, 0, code, knownNames);
       return { ok: false, error: le.toCellError() };
     } finally {
+      flushPending = () => {};
       sink = SILENT_SINK;
     }
   };

@@ -106,6 +106,15 @@ describe("run with values already shown", () => {
     // Same cell: the producing statement is skipped, a later line naming the value shows it.
     expect(text(session.run("y = shown_once()\ny", capture().sink))).toBe("the chart");
   });
+  it("run keeps outputs in statement order when a later statement displays (show, progress)", () => {
+    const { session } = createSessionWithInternals({ shouldStop: () => false }, [shownOnce]);
+    const c = capture();
+    expect(text(session.run("1 bar\nshow(2 bar)\n3 bar", c.sink))).toBe("3 bar");
+    expect(c.shown).toEqual(["1 bar", "2 bar"]);
+    const d = capture();
+    expect(session.run("5\nx = shown_once()", d.sink)).toEqual({ ok: true });
+    expect(d.shown).toEqual(["5", "the chart"]);
+  });
   it("evaluateExpression returns the value: nothing was shown to a user", () => {
     const { session } = createSessionWithInternals({ shouldStop: () => false }, [shownOnce]);
     expect(text(session.evaluateExpression("shown_once()"))).toBe("the chart");
