@@ -49,3 +49,4 @@ export {
   if97State, if97Psat, if97Tsat, toMolar, M_WATER, T_CRIT as WATER_T_CRIT, P_CRIT_MPA as WATER_P_CRIT_MPA,
   VALIDITY_TEXT as WATER_VALIDITY, type WaterState, type WaterPhase, type IF97Input,
 } from "./water/index.js";
+export { waterResidual, type WaterResidual } from "./water/index.js";

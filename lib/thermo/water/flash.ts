@@ -49,7 +49,7 @@ function flash(p: number, y: number, key: Key): WaterState {
   }
   if (p < P_MIN_SAT_MPA * 1e6) return vaporSide(p, y, key, T_MIN);
   if (p <= P_13_MPA * 1e6) {
-    const Ts = if97Tsat(p);
+    const Ts = Math.max(T_MIN, if97Tsat(p)); // Eq. (31) rounds just below 273.15 K at the lowest pressures
     const liq = region1(Ts, p);
     const vap = region2(Ts, p);
     if (y <= liq[key]) return solveGibbsRegion(region1, p, y, key, T_MIN, Ts, backward1(p, y, key));
@@ -61,7 +61,7 @@ function flash(p: number, y: number, key: Key): WaterState {
   const TB = b23Temperature(p);
   if (y >= region2(TB, p)[key]) return vaporSide(p, y, key, TB);
   if (p < P_CRIT_MPA * 1e6) {
-    const Ts = if97Tsat(p);
+    const Ts = Math.max(T_MIN, if97Tsat(p)); // Eq. (31) rounds just below 273.15 K at the lowest pressures
     const { liquid, vapor } = saturatedPair(Ts);
     if (y > liquid[key] && y < vapor[key]) return twoPhase(Ts, y, key);
     if (y <= liquid[key]) return solveRegion3(p, y, key, T_13, Ts, "liquid");
@@ -102,13 +102,32 @@ function solveGibbsRegion(fn: RegionFn, p: number, y: number, key: Key, lo: numb
       if (Math.abs(dT) < 1e-10 * T) return label(fn(Math.min(hi, Math.max(lo, T)), p));
     }
   }
+  const edge = seam((t) => fn(t, p)[key] - y, lo, hi, key, y);
+  if (edge !== undefined) return label(fn(edge, p));
   T = brent((t) => fn(t, p)[key] - y, lo, hi, { xtol: 1e-11 * hi, rtol: 0 }, "IF97 flash").value;
   return label(fn(T, p));
 }
 
+/**
+ * Adjacent IF97 regions meet only to the release's consistency tolerances, so at a boundary (623.15 K
+ * between 1 and 3, B23 between 2 and 3, 1073.15 K between 2 and 5) a value y can fall in the thin gap
+ * between the two regions' boundary values. Such a y belongs on the boundary: return that end. Returns
+ * undefined when [lo, hi] brackets y (the normal case); a miss wider than 1e-4 relative is a real error.
+ */
+function seam(f: (T: number) => number, lo: number, hi: number, key: Key, y: number): number | undefined {
+  const flo = f(lo);
+  const fhi = f(hi);
+  if (flo <= 0 && fhi >= 0) return undefined;
+  const tol = 1e-4 * Math.max(Math.abs(y), key === "h" ? 1e5 : 100);
+  if (flo > 0 && flo <= tol) return lo;
+  if (fhi < 0 && -fhi <= tol) return hi;
+  throw new ThermoError(key, `IF97 flash: ${key} = ${y} is not reached between T = ${lo} K and ${hi} K at this pressure`);
+}
+
 function solveRegion3(p: number, y: number, key: Key, lo: number, hi: number, branch: "liquid" | "vapor"): WaterState {
   const at = (T: number): WaterState => region3(region3Density(p, T, branch), T);
-  const T = brent((t) => at(t)[key] - y, lo, hi, { xtol: 1e-11 * hi, rtol: 0 }, "IF97 region 3 flash").value;
+  const edge = seam((t) => at(t)[key] - y, lo, hi, key, y);
+  const T = edge ?? brent((t) => at(t)[key] - y, lo, hi, { xtol: 1e-11 * hi, rtol: 0 }, "IF97 region 3 flash").value;
   const st = at(T);
   return label({ ...st, p, phase: T < T_CRIT ? branch : st.phase });
 }

@@ -1,11 +1,12 @@
 /**
  * if97State: the one entry point for water and steam by IAPWS-IF97. Accepts exactly one of the input
- * pairs {T, p}, {p, h}, {p, s}, {T, x}, {p, x} in SI (K, Pa, J/kg, J/(kg K), x as vapour mass fraction
+ * pairs {T, p}, {p, h}, {p, s}, {h, s}, {T, x}, {p, x} in SI (K, Pa, J/kg, J/(kg K), x as vapour mass fraction
  * 0..1) and returns a WaterState in SI. Out-of-range input throws ThermoError naming the argument.
  */
 import { ThermoError } from "../errors.js";
 import { P_CRIT_MPA, P_MIN_SAT_MPA, T_CRIT, T_MIN } from "./constants.js";
 import { statePH, statePS } from "./flash.js";
+import { stateHS } from "./hs.js";
 import type { WaterState } from "./properties.js";
 import { mixture, saturatedPair, stateTP } from "./regions.js";
 import { if97Tsat } from "./saturation.js";
@@ -14,10 +15,11 @@ export type IF97Input =
   | { T: number; p: number }
   | { p: number; h: number }
   | { p: number; s: number }
+  | { h: number; s: number }
   | { T: number; x: number }
   | { p: number; x: number };
 
-const PAIRS = "{T, p}, {p, h}, {p, s}, {T, x} or {p, x}";
+const PAIRS = "{T, p}, {p, h}, {p, s}, {h, s}, {T, x} or {p, x}";
 
 /** Water/steam state from one input pair (SI). See the module comment for the accepted pairs. */
 export function if97State(input: IF97Input): WaterState {
@@ -35,6 +37,8 @@ export function if97State(input: IF97Input): WaterState {
       return statePH(i.p as number, i.h as number);
     case "p,s":
       return statePS(i.p as number, i.s as number);
+    case "h,s":
+      return stateHS(i.h as number, i.s as number);
     case "T,x":
       return saturatedTX(i.T as number, i.x as number);
     case "p,x":
