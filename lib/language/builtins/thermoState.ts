@@ -9,7 +9,7 @@ import { ArgumentError } from "./bind.js";
 import { defineBuiltin, type BuiltinContext, type BuiltinDef } from "./define.js";
 import { guard, lengthOf, pick, requireAllAbove0, siArg } from "./thermoArgs.js";
 import { columnCollector, eosRowAt, recordOf, rowOf } from "./thermoRows.js";
-import { waterAt, waterFromSpec, type Row } from "./water.js";
+import { waterAt, waterDeparture, waterFromSpec, type Row } from "./water.js";
 
 const PHASES = ["stable", "liquid", "vapor", "vapour"];
 const SPEC_DIMS: Record<string, string> = {
@@ -132,9 +132,9 @@ export const thermoState: BuiltinDef[] = [
     vectorize: true,
     impl: ({ m, T, P, options }, ctx) => {
       const d = dataOf(m);
-      if (d.id === "if97") throw new ArgumentError('argument m of departure(): if97() gives total properties (state()), not departure functions; use an equation-of-state model such as pr("water")');
       const o = (options ?? {}) as Record<string, unknown>;
       for (const k of Object.keys(o)) if (!["route", "phase", "rel"].includes(k)) throw new ArgumentError(`option "${k}" of departure() is not known; valid options: route, phase, rel`);
+      if (d.id === "if97") return waterDeparture(T, P, o, "departure");
       const route = o.route ?? "closed";
       if (route !== "closed" && route !== "integrate") throw new ArgumentError(`option route of departure() must be "closed" or "integrate", got ${ctx.textOf(route)}`);
       const phase = o.phase === "vapour" ? "vapor" : (o.phase ?? "stable") as "stable";

@@ -4,7 +4,7 @@
  * IF97 is mass-based; molar fields use M = 18.015268 g/mol (IAPWS).
  */
 import {
-  R, WATER_P_CRIT_MPA, WATER_T_CRIT, WATER_VALIDITY, M_WATER, if97State, toMolar,
+  R, WATER_P_CRIT_MPA, WATER_T_CRIT, WATER_VALIDITY, M_WATER, if97State, toMolar, waterResidual,
   type IF97Input, type WaterState,
 } from "../../thermo/index.js";
 import { thermoValue, type ModelData } from "../values/thermo.js";
@@ -33,6 +33,7 @@ export function waterRow(st: WaterState, fn: string, phase?: string): Row {
     h: st.h, s: st.s, u: st.u, g: st.g, a: st.a,
     Cp: m.Cp, Cv: m.Cv, cp: st.cp, cv: st.cv, w: st.w,
   });
+  Object.assign(row, departureFields(st));
   const notes: string[] = [`IF97 region ${st.region}`];
   if (Math.abs(st.T / WATER_T_CRIT - 1) < 0.03 && Math.abs(st.p / (WATER_P_CRIT_MPA * 1e6) - 1) < 0.1) {
     notes.push("near the critical point (647.096 K, 22.064 MPa): properties change steeply here");
@@ -40,6 +41,34 @@ export function waterRow(st: WaterState, fn: string, phase?: string): Row {
   if (st.phase === "two-phase") notes.push("two-phase (vapour fraction in x): Cp, Cv and w are undefined inside the dome");
   row.notes = notes.join("; ");
   return row;
+}
+
+/**
+ * Molar departures HR, SR, UR, GR, AR and phi, lnphi, f of a water state, against IF97's own ideal-gas
+ * part (region 2 Table 10; region 5 Table 37 above 1073.15 K), so they vanish as P -> 0.
+ */
+function departureFields(st: WaterState): Row {
+  const r = waterResidual(st);
+  return {
+    HR: r.hr * M_WATER, SR: r.sr * M_WATER, UR: r.ur * M_WATER, GR: r.gr * M_WATER, AR: r.ar * M_WATER,
+    phi: r.phi, lnphi: r.lnphi, f: r.f,
+  };
+}
+
+/**
+ * departure(if97(), T, P): the departure record (T, P, V, Z, phase, HR, SR, UR, GR, AR, lnphi, phi; the same
+ * fields as for an equation of state) of the stable IF97 state; state() carries f as well. Only the closed route exists: IF97 is a Gibbs/Helmholtz fit, not a P(T, V) model.
+ */
+export function waterDeparture(T: number, P: number, options: Record<string, unknown>, fn: string): Row {
+  if (options.route !== undefined && options.route !== "closed") {
+    throw new ArgumentError(`option route of ${fn}(): if97() has only the "closed" route (its residual part against the IF97 ideal-gas equation); "integrate" needs a pressure-explicit model such as pr("water")`);
+  }
+  const st = guard(fn, () => if97State({ T, p: P }), rename);
+  const ph = options.phase === "vapour" ? "vapor" : (options.phase as string | undefined);
+  waterRow(st, fn, ph); // rejects a phase IF97 cannot give, with the usual message
+  const V = st.v * M_WATER;
+  const { HR, SR, UR, GR, AR, lnphi, phi } = departureFields(st);
+  return { T, P, V, phase: st.phase, route: "closed", Z: (P * V) / (R * T), HR, SR, UR, GR, AR, lnphi, phi };
 }
 
 const rename = { p: "P", input: "spec" };
@@ -58,10 +87,14 @@ export function waterFromSpec(spec: Record<string, number>, fn: string): Row {
     case "P,h": input = { p: spec.P!, h: spec.h! }; break;
     case "P,S": input = { p: spec.P!, s: spec.S! / M_WATER }; break;
     case "P,s": input = { p: spec.P!, s: spec.s! }; break;
+    case "H,S": input = { h: spec.H! / M_WATER, s: spec.S! / M_WATER }; break;
+    case "H,s": input = { h: spec.H! / M_WATER, s: spec.s! }; break;
+    case "S,h": input = { h: spec.h!, s: spec.S! / M_WATER }; break;
+    case "h,s": input = { h: spec.h!, s: spec.s! }; break;
     case "T,x": input = { T: spec.T!, x: spec.x! }; break;
     case "P,x": input = { p: spec.P!, x: spec.x! }; break;
     default:
-      throw new ArgumentError(`argument spec of ${fn}(): if97() takes the pairs {T, P}, {P, H or h}, {P, S or s}, {T, x} or {P, x}; got {${Object.keys(spec).join(", ")}}`);
+      throw new ArgumentError(`argument spec of ${fn}(): if97() takes the pairs {T, P}, {P, H or h}, {P, S or s}, {H or h, S or s}, {T, x} or {P, x}; got {${Object.keys(spec).join(", ")}}`);
   }
   return waterRow(guard(fn, () => if97State(input), rename), fn);
 }
@@ -91,10 +124,10 @@ export const water: BuiltinDef[] = [
     group: "thermo",
     params: [],
     returns: "model",
-    doc: "Water and steam by the industrial standard IAPWS-IF97, used with the same built-ins as every other model: state(if97(), T, P), state(if97(), {P: .., h: ..}), psat(if97(), T), tsat(if97(), P), volume(), zfactor().",
-    method: "IF97 regions 1, 2, 3 and 5 (Gibbs and Helmholtz free-energy equations), region 4 saturation line, B23 boundary and the backward equations T(p,h), T(p,s) for the flashes. Mass-based; molar values with M = 18.015268 g/mol.",
+    doc: "Water and steam by the industrial standard IAPWS-IF97, used with the same built-ins as every other model: state(if97(), T, P), state(if97(), {P: .., h: ..}), state(if97(), {h: .., s: ..}), departure(if97(), T, P), psat(if97(), T), tsat(if97(), P), volume(), zfactor(). States carry the departures HR, SR, UR, GR, AR, phi, lnphi and f against IF97's own ideal-gas part.",
+    method: "IF97 regions 1, 2, 3 and 5 (Gibbs and Helmholtz free-energy equations), region 4 saturation line, B23 boundary and the backward equations T(p,h), T(p,s), p(h,s) as starting points, refined on the basic equations. Departures: total minus the IF97 ideal-gas part (region 2 Table 10; region 5 Table 37 above 1073.15 K) at the same T and P. Mass-based; molar values with M = 18.015268 g/mol.",
     source: IF97_SOURCE,
-    examples: ["if97()", "state(if97(), 500 K, 10 bar).h"],
+    examples: ["if97()", "state(if97(), 500 K, 10 bar).h", "state(if97(), {h: 3000 kJ/kg, s: 6.5 kJ/(kg K)}).P", "departure(if97(), 500 K, 10 bar).phi"],
     impl: (_args, ctx) => if97Model(ctx),
   }),
 ];

@@ -116,10 +116,10 @@ describe("departure", () => {
     expect(rel(value("departure(m, 350 K, 10 bar).lnphi") as number, lib.lnphi)).toBeLessThan(1e-12);
   });
 
-  it("departure vectorises over a span and rejects if97() and unknown options", () => {
+  it("departure vectorises over a span and rejects if97()'s integrate route and unknown options", () => {
     const c = value("departure(m, span(300 K, 400 K, 3), 1 bar)") as Record<string, unknown>;
     expect(isQuantityColumn(c.HR) && c.HR.si.length).toBe(3);
-    expect(errorOf("departure(if97(), 400 K, 1 bar)")).toMatch(/argument m of departure\(\): if97\(\)/);
+    expect(errorOf('departure(if97(), 400 K, 1 bar, {route: "integrate"})')).toMatch(/option route of departure\(\): if97\(\) has only the "closed" route/);
     expect(errorOf('departure(m, 400 K, 1 bar, {road: "x"})')).toMatch(/option "road" of departure\(\)/);
     expect(errorOf('departure(m, 400 K, 1 bar, {route: "x"})')).toMatch(/route of departure\(\) must be/);
   });
