@@ -1,15 +1,14 @@
 /**
- * Composition root of the kernel process: binds the sockets from the connection file and answers on
- * the main thread. The engine (and with it the worker thread and the cell language) is loaded only
+ * Composition root of the kernel process: binds the sockets from the connection file (before loading
+ * anything else) and answers on the main thread. The engine (and with it the worker thread and the cell language) is loaded only
  * after the first kernel_info exchange has been sent, or on the first request that needs it, or after
  * `engineStartMs` at the latest: on a busy machine a worker loading mathjs next to the first
  * kernel_info_reply would slow the kernel's cold start.
  */
 import { randomUUID } from "node:crypto";
 import type { Interpreter } from "./engine/index.js";
-import { ExecutionState } from "./execution/index.js";
-import { Dispatcher, HANDLERS, type KernelServices } from "./handlers/index.js";
-import { IMPLEMENTATION_VERSION, makeBroadcast, type Message } from "./protocol/index.js";
+import type { KernelServices } from "./handlers/index.js";
+import type { Message } from "./protocol/index.js";
 import { KernelSockets, readConnectionFile, type WireMessage } from "./wire/index.js";
 
 export interface KernelOptions {
@@ -76,6 +75,13 @@ export async function runKernel(options: KernelOptions): Promise<KernelHandle> {
   const exit = options.exit ?? ((code: number) => process.exit(code));
   const info = readConnectionFile(options.connectionFile);
   const sockets = await KernelSockets.bind(info, { log });
+  // Bound first: clients connect (zeromq's I/O thread does the handshakes and the iopub subscription)
+  // while the rest of the kernel loads. Requests wait in the sockets until listen() below.
+  const [{ ExecutionState }, { Dispatcher, HANDLERS }, { IMPLEMENTATION_VERSION, makeBroadcast }] = await Promise.all([
+    import("./execution/index.js"),
+    import("./handlers/index.js"),
+    import("./protocol/index.js"),
+  ]);
   const identity = { session: randomUUID(), username: "caloric" };
   const engine = new LazyEngine(async () => {
     const { InProcessEngine, WorkerEngine } = await import("./engine/index.js");

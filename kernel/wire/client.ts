@@ -4,7 +4,7 @@
  * wire layer stays free of the protocol layer; the shape is the messaging spec's (version 5.3).
  */
 import { randomUUID } from "node:crypto";
-import * as zmq from "zeromq";
+import { zmq, type Zmq } from "./zmq.js";
 import { decode, encode, type Json, type WireMessage } from "./codec.js";
 import { endpoint, type ConnectionInfo } from "./connection.js";
 import { SendQueue } from "./sendQueue.js";
@@ -37,7 +37,7 @@ export class KernelClient {
   private closed = false;
 
   private constructor(
-    private readonly sockets: { shell: zmq.Dealer; control: zmq.Dealer; stdin: zmq.Dealer; iopub: zmq.Subscriber; hb: zmq.Request },
+    private readonly sockets: { shell: Zmq.Dealer; control: Zmq.Dealer; stdin: Zmq.Dealer; iopub: Zmq.Subscriber; hb: Zmq.Request },
     private readonly signer: Signer,
   ) {
     this.queues = {

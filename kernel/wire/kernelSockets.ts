@@ -3,7 +3,7 @@
  * (REP) from a connection file, verifies and decodes incoming frames, and writes every outgoing message
  * through its socket's send queue. Bad frames are dropped and logged (stderr), never passed on.
  */
-import * as zmq from "zeromq";
+import { zmq, type Zmq } from "./zmq.js";
 import { decode, encode, type WireMessage } from "./codec.js";
 import { endpoint, type ConnectionInfo } from "./connection.js";
 import { runHeartbeat } from "./heartbeat.js";
@@ -26,12 +26,12 @@ export class KernelSockets {
   private closed = false;
 
   private constructor(
-    private readonly sockets: { shell: zmq.Router; control: zmq.Router; stdin: zmq.Router; iopub: zmq.Publisher; hb: zmq.Reply },
+    private readonly sockets: { shell: Zmq.Router; control: Zmq.Router; stdin: Zmq.Router; iopub: Zmq.Publisher; hb: Zmq.Reply },
     private readonly signer: Signer,
     private readonly options: KernelSocketsOptions,
   ) {
     this.replay = new ReplayGuard(options.replayCapacity ?? 4096);
-    const q = (s: zmq.Socket & { send(f: Buffer[]): Promise<void> }, name: string) =>
+    const q = (s: Zmq.Socket & { send(f: Buffer[]): Promise<void> }, name: string) =>
       new SendQueue((f) => s.send(f), (e) => options.log(`send on ${name} failed: ${(e as Error).message}`));
     this.queues = {
       shell: q(sockets.shell, "shell"),

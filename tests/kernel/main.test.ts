@@ -90,7 +90,7 @@ describe("runKernel", () => {
     expect(k.exits).toEqual([0]);
   });
 
-  it("runKernel's module graph (compiled) loads neither the engine nor anything from lib/", () => {
+  it("runKernel's static module graph (compiled) holds the wire but neither the engine nor anything from lib/", () => {
     const dir = mkdtempSync(join(tmpdir(), "caloric-graph-"));
     writeFileSync(join(dir, "hook.mjs"), 'export async function load(url, context, next) { if (url.startsWith("file:")) process.stderr.write("LOADED " + url + "\\n"); return next(url, context); }\n');
     writeFileSync(join(dir, "register.mjs"), `import { register } from "node:module";\nregister(${JSON.stringify(pathToFileURL(join(dir, "hook.mjs")).href)});\n`);
@@ -99,7 +99,7 @@ describe("runKernel", () => {
     expect(r.status, r.stderr).toBe(0);
     const loaded = r.stderr.split("\n").filter((l) => l.startsWith("LOADED ")).map((l) => l.slice("LOADED ".length));
     expect(loaded.some((u) => u.endsWith("/dist/kernel/main.js"))).toBe(true); // the hook saw the graph
-    expect(loaded.some((u) => u.includes("/dist/kernel/handlers/"))).toBe(true);
+    expect(loaded.some((u) => u.endsWith("/dist/kernel/wire/kernelSockets.js"))).toBe(true); // sockets bind before the rest loads
     expect(loaded.filter((u) => u.includes("/dist/lib/") || u.includes("/dist/kernel/engine/") || /node_modules\/(mathjs|vega)/.test(u))).toEqual([]);
   });
 });
