@@ -21,6 +21,9 @@ describe("jupyter_kernel_test conformance", () => {
     const out = `${r.stdout}\n${r.stderr}`;
     const skipped = out.split("\n").filter((l) => /\bskipped\b/.test(l) && /^test_/.test(l));
     expect(skipped, out).toEqual([]);
+    // jupyter_kernel_test 0.4.5 (Debian 12) defines 12 test methods; fewer would mean a sample lost its test.
+    const ran = Number(/\nRan (\d+) tests? in/.exec(out)?.[1] ?? 0);
+    expect(ran, out).toBeGreaterThanOrEqual(12);
     expect(out, out).toMatch(/\nOK\s*$/);
     expect(r.status, out).toBe(0);
   });
