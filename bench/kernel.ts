@@ -41,6 +41,9 @@ const rtEmpty = ms(vsEmpty, "B", "round_trip", "rt", "median");
 const rtPython = ms(vsPython, "B", "round_trip", "rt", "median");
 
 console.log(`cold start to kernel_info_reply (median): caloric ${coldCaloric.toFixed(0)} ms, python kernel ${coldPython.toFixed(0)} ms -> ratio ${(coldCaloric / coldPython).toFixed(3)} (target <= 0.2)`);
+const readyCaloric = ms(vsPython, "A", "cold_start", "ready", "median");
+const readyPython = ms(vsPython, "B", "cold_start", "ready", "median");
+console.log(`cold start to ready (reply and an iopub status, median): caloric ${readyCaloric.toFixed(0)} ms, python kernel ${readyPython.toFixed(0)} ms -> ratio ${(readyCaloric / readyPython).toFixed(3)}`);
 console.log(`execute round trip of 1+1 (median): caloric ${rtCaloric.toFixed(2)} ms, empty kernel ${rtEmpty.toFixed(2)} ms -> ratio ${(rtCaloric / rtEmpty).toFixed(3)} (target <= 1.25)`);
 console.log(`execute round trip vs python kernel: ${(ms(vsPython, "A", "round_trip", "rt", "median") / rtPython).toFixed(3)} (python ${rtPython.toFixed(2)} ms)`);
 console.log(`protocol checks (caloric): ${JSON.stringify(vsEmpty.kernels.A.protocol_checks)}`);
