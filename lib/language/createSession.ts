@@ -15,6 +15,9 @@ import { createColumnFactory } from "./values/column.js";
 import { isRichValue } from "./values/rich.js";
 import { createFormatter } from "./format.js";
 import { scanCell, positionOf } from "./statements.js";
+import { foldConstantQuantities } from "./fold.js";
+import { pollInFunctionBodies } from "./interruptible.js";
+import { sizeGuards } from "./guards.js";
 import { LanguageError, translateError } from "./errors.js";
 import { completeAt } from "./complete.js";
 import { inspectAt } from "./inspect.js";
@@ -62,7 +65,7 @@ export function createSessionWithInternals(
   const getCtx = () => ctx!;
   const { math, parse } = createRestrictedMath({
     installUnits,
-    functions: (m) => Object.fromEntries(all.map((def) => [def.name, bindBuiltin(def, m, getCtx)])),
+    functions: (m) => ({ ...sizeGuards(m), ...Object.fromEntries(all.map((def) => [def.name, bindBuiltin(def, m, getCtx)])) }),
   });
 
   const units = createUnitsBridge(math);
@@ -113,8 +116,11 @@ export function createSessionWithInternals(
   interface Compiled { evaluate(scope: Map<string, unknown>): unknown; assigned?: string }
   // Parsed statements by source text: re-running a cell skips the parser.
   const compiled = new Map<string, Compiled>();
+  const UnitClass = (math as unknown as { Unit: Parameters<typeof foldConstantQuantities>[1] }).Unit;
   const compile = (text: string): Compiled => {
     const node = parse(text) as MathNode & { object?: MathNode & { name?: string } };
+    foldConstantQuantities(node, UnitClass);
+    pollInFunctionBodies(node, options.shouldStop, () => new Interrupted());
     const code = node.compile() as Compiled;
     const assigned = node.type === "AssignmentNode" && node.object?.type === "SymbolNode" ? node.object.name : undefined;
     return { evaluate: (s) => code.evaluate(s), assigned };

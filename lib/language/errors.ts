@@ -44,9 +44,20 @@ function findWord(text: string, name: string): number {
   return m ? m.index + m[1]!.length : -1;
 }
 
+/** mathjs rethrows an error from a callback (map, filter, forEach) as a TypeError carrying only the text. */
+const CALLBACK_ERROR = /^Function (\w+) cannot apply callback arguments to function ([^:]+): ([\s\S]*)$/;
+
 function explain(err: unknown, text: string, names: NameSource): Located {
   const e = err as { name?: string; message?: string; char?: number; code?: string };
   const message = String(e?.message ?? err);
+  const wrapped = CALLBACK_ERROR.exec(message);
+  if (wrapped) {
+    const inner = wrapped[3]!;
+    // The interrupt thrown inside a user function must still read as an interrupt.
+    if (/^interrupted by the user/.test(inner)) return { kind: "Interrupted", message: inner };
+    const found = explain({ message: inner }, text, names);
+    return { ...found, message: `${found.message} (in ${wrapped[2]!.trim()} called by ${wrapped[1]}())` };
+  }
   if (e?.name === "SyntaxError" && typeof e.char === "number") {
     const clean = message.replace(/\s*\(char \d+\)$/, "");
     return { kind: "SyntaxError", message: clean.charAt(0).toLowerCase() + clean.slice(1), offset: Math.max(0, e.char - 1) };

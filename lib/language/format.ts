@@ -83,20 +83,25 @@ export function createFormatter(math: MathJsInstance, units: UnitsBridge): Forma
     return { [MIME.text]: plain, [MIME.html]: html };
   };
 
-  const latexOfUnit = (u: Unit): string | undefined => {
-    const unit = u.formatUnits();
-    if (!unit || u.value === null) return undefined;
-    const n = text(u).slice(0, -unit.length).trim();
-    const tex = unit.replace(/\^(-?\d+)/g, "^{$1}").replace(/ /g, "\\,");
+  /**
+   * LaTeX from the quantity's text ("0.0093924 (bar L mol) / J"): the number and unit exactly as
+   * text/plain shows them (units cancelled once, formatted once).
+   */
+  const latexOfText = (shown: string): string | undefined => {
+    const cut = shown.indexOf(" ");
+    if (cut < 0) return undefined;
+    const n = shown.slice(0, cut);
+    const tex = shown.slice(cut + 1).replace(/\^(-?[\d.]+)/g, "^{$1}").replace(/ /g, "\\,");
     return `$${n.replace(/e([+-]?\d+)$/, (_, e: string) => `\\times 10^{${Number(e)}}`)}\\ \\mathrm{${tex}}$`;
   };
 
   const bundle = (value: unknown): MimeBundle => {
     if (isRichValue(value)) return value.toBundle();
     if (isRecord(value)) return recordBundle(value);
-    const b: MimeBundle = { [MIME.text]: text(value) };
-    if (math.isUnit(value)) {
-      const tex = latexOfUnit(value);
+    const shown = text(value);
+    const b: MimeBundle = { [MIME.text]: shown };
+    if (math.isUnit(value) && value.value !== null) {
+      const tex = latexOfText(shown);
       if (tex) b[MIME.latex] = tex;
     }
     return b;

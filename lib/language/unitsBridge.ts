@@ -5,7 +5,8 @@
  */
 import type { MathJsInstance, Unit } from "mathjs";
 import {
-  DIMENSIONS, chooseUnit, dimensionOf, formatQuantity, fromSI, isDimensionName, scalarSI,
+  DIMENSIONS, chooseUnit, chooseUnitName, dimensionOf, formatQuantity, fromSI, hasDimension, isDimensionName, scalarSI,
+  type DimensionName,
 } from "../units/index.js";
 
 export interface UnitsBridge {
@@ -37,6 +38,17 @@ export function describeDimension(dim: string): string {
 
 export function createUnitsBridge(math: MathJsInstance): UnitsBridge {
   const siUnitOf = (dimOrUnit: string) => (isDimensionName(dimOrUnit) ? DIMENSIONS[dimOrUnit].si : dimOrUnit);
+  // Display follows the quantity's dimension, not the declared name: a molar heat capacity shows
+  // like the molar entropy listed first with the same exponents (what dimensionOf reports).
+  const canonical = new Map<DimensionName, DimensionName>();
+  const canonicalOf = (dim: DimensionName): DimensionName => {
+    let c = canonical.get(dim);
+    if (c === undefined) {
+      c = (Object.keys(DIMENSIONS) as DimensionName[]).find((n) => hasDimension(DIMENSIONS[dim].exponents, n)) ?? dim;
+      canonical.set(dim, c);
+    }
+    return c;
+  };
   return {
     dimensions: Object.keys(DIMENSIONS),
     toSI(value, dim, argName, fnName) {
@@ -44,6 +56,18 @@ export function createUnitsBridge(math: MathJsInstance): UnitsBridge {
       return scalarSI(value, dim, argName, fnName);
     },
     fromSI(x, dimOrUnit) {
+      if (isDimensionName(dimOrUnit) && Number.isFinite(x)) {
+        if (DIMENSIONS[dimOrUnit].si === "") return x;
+        const name = chooseUnitName(x, canonicalOf(dimOrUnit));
+        if (name !== undefined) {
+          // What Unit.to(name) builds, without a conversion: mathjs stores values in SI (none of
+          // the display candidates has an offset), and `to` fixes the prefix.
+          const u = math.unit(name) as Unit & { value: number; fixPrefix: boolean };
+          u.value = x;
+          u.fixPrefix = true;
+          return u;
+        }
+      }
       const q = fromSI(math, x, dimOrUnit);
       return typeof q === "number" || !isDimensionName(dimOrUnit) || !Number.isFinite(x) ? q : chooseUnit(q);
     },

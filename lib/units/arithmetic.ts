@@ -49,7 +49,7 @@ export function installOffsetPolicy(math: MathJsInstance): void {
   const m = math as unknown as Record<string, (...args: unknown[]) => unknown>;
   const orig = Object.fromEntries(
     ["add", "subtract", "multiply", "divide", "dotMultiply", "dotDivide", "pow", "dotPow", "sum", "mean",
-     "compare", "equal", "unequal", "larger", "largerEq", "smaller", "smallerEq"].map((n) => [n, m[n]!]),
+     "compare", "equal", "unequal", "larger", "largerEq", "smaller", "smallerEq", "cbrt"].map((n) => [n, m[n]!]),
   );
 
   const sumLike = (op: "add" | "subtract"): Binary => {
@@ -120,7 +120,15 @@ export function installOffsetPolicy(math: MathJsInstance): void {
     return (orig.mean!(flat.map((x) => absoluteOf(math, x as Unit))) as Unit).to(first.units[0]!.unit.name);
   };
 
+  // mathjs 15's cbrt of a negative quantity flips the sign of its ARGUMENT in place (x = -8 m^3;
+  // cbrt(x) leaves x = 8 m^3): hand it a copy.
+  const own = (x: unknown): unknown => (isUnitValue(x) ? x.clone() : isCollection(x) ? math.clone(x as never) : x);
+
   const overrides: Record<string, unknown> = {
+    cbrt: math.typed("cbrt", {
+      any: (x: unknown) => orig.cbrt!(own(x)),
+      "any, boolean": (x: unknown, all: boolean) => orig.cbrt!(own(x), all),
+    }),
     add: binary("add", sumLike("add")),
     subtract: math.typed("subtract", { "any, any": sumLike("subtract") }),
     multiply: binary("multiply", productLike("multiply", "multiply", false)),

@@ -7,7 +7,7 @@
  */
 import type { Unit } from "mathjs";
 import { type DimensionName, dimensionOf } from "./dimensions.js";
-import { isUnitValue } from "./offset.js";
+import { isOffsetQuantity, isUnitValue } from "./offset.js";
 import { cancelUnits } from "./simplify.js";
 
 export const DISPLAY_CANDIDATES: Partial<Record<DimensionName, readonly string[]>> = {
@@ -27,6 +27,51 @@ export const DISPLAY_CANDIDATES: Partial<Record<DimensionName, readonly string[]
   time: ["s"],
   temperature: ["K"],
 };
+
+/**
+ * SI value of one of each display candidate (1 kPa = 1e3 Pa, 1 cm^3/mol = 1e-6 m^3/mol ...), so the
+ * choice is made on plain numbers and only the chosen unit is converted to. Exact by the SI prefix
+ * definitions (and 1 L = 1e-3 m^3, 1 t = 1e3 kg, CGPM 1964/1879); format.test.ts checks every entry
+ * against mathjs's own unit table.
+ */
+export const CANDIDATE_SI_FACTORS: Readonly<Record<string, number>> = {
+  Pa: 1, kPa: 1e3, MPa: 1e6, GPa: 1e9,
+  J: 1, kJ: 1e3, MJ: 1e6, GJ: 1e9,
+  "J/mol": 1, "kJ/mol": 1e3,
+  "J/kg": 1, "kJ/kg": 1e3, "MJ/kg": 1e6,
+  "cm^3/mol": 1e-6, "L/mol": 1e-3, "m^3/mol": 1,
+  "cm^3": 1e-6, L: 1e-3, "m^3": 1,
+  W: 1, kW: 1e3, MW: 1e6, GW: 1e9,
+  "J/(mol K)": 1, "kJ/(mol K)": 1e3,
+  "J/(kg K)": 1, "kJ/(kg K)": 1e3,
+  "kg/m^3": 1,
+  mm: 1e-3, m: 1, km: 1e3,
+  g: 1e-3, kg: 1, t: 1e3,
+  "g/mol": 1e-3, "kg/mol": 1,
+  s: 1,
+  K: 1,
+};
+
+/**
+ * The candidate that puts |si| (an SI magnitude of the dimension) in [1, 1000), else the nearest to
+ * that range (module note). Plain numbers only; undefined when the dimension has no candidates.
+ */
+export function chooseUnitName(si: number, dim: DimensionName): string | undefined {
+  const cands = DISPLAY_CANDIDATES[dim];
+  if (cands === undefined) return undefined;
+  let best = cands[0]!;
+  let bestScore = Infinity;
+  const a = Math.abs(si);
+  for (const c of cands) {
+    const v = a / (CANDIDATE_SI_FACTORS[c] ?? NaN);
+    const score = v === 0 ? 0 : v >= 1 && v < 1000 ? 0 : Math.abs(Math.log10(v) - (v < 1 ? 0 : 2.999));
+    if (score < bestScore) {
+      bestScore = score;
+      best = c;
+    }
+  }
+  return best;
+}
 
 export interface FormatOptions {
   /** Significant figures, 4..6 (default 5). */
@@ -50,19 +95,12 @@ function unitText(u: Unit): string {
 /** Pick the display unit for an SI result (auto mode). */
 export function chooseUnit(u: Unit): Unit {
   const dim = dimensionOf(u);
-  const cands = dim !== undefined ? DISPLAY_CANDIDATES[dim] : undefined;
-  if (cands === undefined) return u;
-  let best = u.to(cands[0]!);
-  let bestScore = Infinity;
-  for (const c of cands) {
-    const v = Math.abs(u.toNumber(c));
-    const score = v === 0 ? 0 : v >= 1 && v < 1000 ? 0 : Math.abs(Math.log10(v) - (v < 1 ? 0 : 2.999));
-    if (score < bestScore) {
-      bestScore = score;
-      best = u.to(c);
-    }
-  }
-  return best;
+  const stored = (u as { value: unknown }).value;
+  if (dim === undefined || stored === null) return u;
+  // mathjs keeps values in SI except for the offset (25 degC is stored as 25): add it where present.
+  const si = isOffsetQuantity(u) ? Number(u.toSI().value) : Number(stored);
+  const name = chooseUnitName(si, dim);
+  return name === undefined ? u : u.to(name);
 }
 
 export function formatQuantity(x: Unit | number, options: FormatOptions = {}): string {
@@ -72,12 +110,7 @@ export function formatQuantity(x: Unit | number, options: FormatOptions = {}): s
   const simpler = cancelUnits(x);
   if (!isUnitValue(simpler)) return formatNumber(simpler, sig);
   const shown = options.auto === true ? chooseUnit(simpler) : simpler;
-  const only = shown.units.length === 1 && shown.units[0]!.power === 1 ? shown.units[0]! : undefined;
-  // For a single unit mathjs's toNumber keeps the offset (25 degC stays 25); compounds use their string.
-  const value = only !== undefined ? shown.toNumber(prefixName(only) + only.unit.name) : shown.toNumber(unitText(shown));
-  return `${formatNumber(value, sig)} ${unitText(shown)}`;
-}
-
-function prefixName(c: Unit["units"][number]): string {
-  return typeof c.prefix === "string" ? c.prefix : ((c.prefix as { name?: string } | undefined)?.name ?? "");
+  // toNumber() without a target reads the value in the unit's own units and prefixes (what
+  // formatUnits prints), offset kept (25 degC stays 25), with no unit string to parse.
+  return `${formatNumber(shown.toNumber(), sig)} ${unitText(shown)}`;
 }

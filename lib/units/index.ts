@@ -8,7 +8,8 @@ export { ADDED_UNITS, type AddedUnit, R_GAS, ATM_PA, PSI_PA } from "./catalog.js
 export { DIMENSIONS, type Dimension, type DimensionName, dimensionOf, hasDimension, isDimensionName } from "./dimensions.js";
 export { toSI, scalarSI, fromSI, fromSIArray, describeValue } from "./convert.js";
 export { per_mass, per_mole } from "./basis.js";
-export { formatQuantity, chooseUnit, DISPLAY_CANDIDATES, type FormatOptions } from "./format.js";
+export { formatQuantity, chooseUnit, chooseUnitName, DISPLAY_CANDIDATES, CANDIDATE_SI_FACTORS, type FormatOptions } from "./format.js";
 export { cancelUnits } from "./simplify.js";
 export { isOffsetQuantity, isUnitValue, absoluteOf } from "./offset.js";
+export { installParseCache, PARSE_CACHE_LIMIT } from "./parseCache.js";
 export { UnitsError, type UnitsErrorCode } from "./errors.js";

@@ -37,8 +37,11 @@ export function isOffsetQuantity(x: unknown): x is Unit {
   return c.unit.offset !== 0 && Math.abs(c.power - 1) < 1e-15;
 }
 
-function kindOf(u: Unit, math: MathJsInstance): Kind {
-  return u.equalBase(math.unit("K")) ? "temperature" : "pressure";
+/** Offset units are temperatures or gauge pressures; a temperature has exponent 1 on TEMPERATURE
+ * (index 4 of mathjs's base dimensions). Read from the exponents: no unit is built or parsed. */
+function kindOf(u: Unit, _math?: MathJsInstance): Kind {
+  const d = u.dimensions;
+  return d[4] === 1 && d.every((x, i) => i === 4 || x === 0) ? "temperature" : "pressure";
 }
 
 function unitName(u: Unit): string {

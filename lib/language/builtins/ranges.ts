@@ -5,8 +5,7 @@
 import type { Unit } from "mathjs";
 import { ArgumentError } from "./bind.js";
 import { defineBuiltin, type BuiltinContext, type BuiltinDef } from "./define.js";
-
-const MAX_POINTS = 10_000_000;
+import { MAX_ELEMENTS as MAX_POINTS } from "../guards.js";
 
 interface Ends { a: number; b: number; siUnit: string; displayUnit: string }
 

@@ -29,3 +29,14 @@ describe("translateError", () => {
     expect([le.kind, le.column]).toEqual(["UnitsError", 5]);
   });
 });
+
+describe("translateError of callback errors", () => {
+  it("translateError unwraps an error mathjs rethrew from a map callback and names the function", () => {
+    const err = new TypeError("Function map cannot apply callback arguments to function f: Units do not match ('bar' != 'K')");
+    const le = translateError(err, "map(xs, f)", 0, "map(xs, f)", () => []);
+    expect(le.kind).toBe("UnitsError");
+    expect(le.message).toMatch(/^units do not match.* \(in f called by map\(\)\)$/);
+    const stop = new TypeError("Function map cannot apply callback arguments to function f: interrupted by the user; variables defined so far are kept");
+    expect(translateError(stop, "map(xs, f)", 0, "map(xs, f)", () => []).kind).toBe("Interrupted");
+  });
+});

@@ -37,3 +37,12 @@ describe("createFormatter", () => {
     expect(f.bundle({ kind: "model", toBundle: () => ({ "text/plain": "PR" }), toText: () => "PR" })).toEqual({ "text/plain": "PR" });
   });
 });
+
+describe("createFormatter latex", () => {
+  it("bundle writes LaTeX with the same number and cancelled unit as the text", () => {
+    const q = math.evaluate("8.314 J/(mol K) * 300 K"); // 8.314 x 300 = 2494.2, K cancels
+    const b = f.bundle(q);
+    expect(b["text/plain"]).toBe("2494.2 J / mol");
+    expect(b["text/latex"]).toBe("$2494.2\\ \\mathrm{J\\,/\\,mol}$");
+  });
+});

@@ -48,3 +48,17 @@ describe("installOffsetPolicy (via installUnits)", () => {
     expect(() => ev("[[25 degC]] * [[2]]")).toThrow(/convert them first/);
   });
 });
+
+describe("cbrt (via installUnits)", () => {
+  const math = mathWithUnits();
+  it("cbrt of a negative quantity leaves its argument unchanged", () => {
+    const x = math.unit(-8, "m^3");
+    const r = math.cbrt(x) as unknown as Unit;
+    expect(r.toNumber("m")).toBeCloseTo(-2, 12); // (-2 m)^3 = -8 m^3
+    expect(x.toNumber("m^3")).toBe(-8); // mathjs 15 alone flips this to +8
+    const xs = [math.unit(-27, "m^3")];
+    math.map(xs as never, math.cbrt as never); // elementwise, as a cell writes map(xs, cbrt)
+    expect(xs[0]!.toNumber("m^3")).toBe(-27);
+    expect(math.cbrt(27)).toBeCloseTo(3, 12); // 3^3 = 27
+  });
+});

@@ -1,5 +1,5 @@
 import { describe, expect, it } from "vitest";
-import { chooseUnit, formatQuantity } from "../../../lib/units/format.js";
+import { CANDIDATE_SI_FACTORS, DISPLAY_CANDIDATES, chooseUnit, chooseUnitName, formatQuantity } from "../../../lib/units/format.js";
 import type { MathJsInstance } from "mathjs";
 import { loadMathjs } from "../../../lib/language/mathjs.js";
 import { installUnits } from "../../../lib/units/index.js";
@@ -34,5 +34,33 @@ describe("formatQuantity", () => {
   it("chooseUnit leaves unknown dimensions alone", () => {
     const u = math.unit(3, "m/s^3");
     expect(chooseUnit(u)).toBe(u);
+  });
+});
+
+describe("chooseUnitName", () => {
+  const math = mathWithUnits();
+  it("CANDIDATE_SI_FACTORS agree with mathjs's unit table for every display candidate", () => {
+    for (const cands of Object.values(DISPLAY_CANDIDATES)) {
+      for (const c of cands!) {
+        // mathjs's own definition of one c in SI, against the table (SI prefixes, L = 1e-3 m^3, t = 1e3 kg)
+        expect(CANDIDATE_SI_FACTORS[c], c).toBeCloseTo(Number(math.unit(1, c).toSI().toNumber()), 12);
+      }
+    }
+  });
+  it("chooseUnitName puts the number in [1, 1000) or nearest to it", () => {
+    expect(chooseUnitName(2.5e6, "pressure")).toBe("MPa"); // 2.5 MPa
+    expect(chooseUnitName(999.9, "pressure")).toBe("Pa");
+    expect(chooseUnitName(1000, "pressure")).toBe("kPa"); // 1 kPa
+    expect(chooseUnitName(-4.2e4, "molar_energy")).toBe("kJ/mol"); // sign ignored: -42 kJ/mol
+    expect(chooseUnitName(2.4e-5, "molar_volume")).toBe("cm^3/mol"); // 24 cm^3/mol
+    expect(chooseUnitName(1e-9, "pressure")).toBe("Pa"); // below every range: the nearest
+    expect(chooseUnitName(1e13, "pressure")).toBe("GPa"); // above every range: the nearest
+    expect(chooseUnitName(0, "energy")).toBe("J");
+    expect(chooseUnitName(5, "heat_flux")).toBeUndefined(); // no candidates: caller keeps SI
+  });
+  it("chooseUnit gives the same choice on quantities, offsets resolved", () => {
+    expect(chooseUnit(math.unit(2.5e6, "Pa")).formatUnits()).toBe("MPa");
+    expect(chooseUnit(math.unit(25, "degC")).toNumber("K")).toBeCloseTo(298.15, 12); // 0 degC = 273.15 K (ITS-90)
+    expect(chooseUnit(math.unit(0, "barg")).formatUnits()).toBe("kPa"); // 0 barg = 101.325 kPa absolute
   });
 });
