@@ -1,5 +1,7 @@
 import { describe, expect, it } from "vitest";
-import { region3, region3Density, region3Pressure } from "../../../../lib/thermo/water/region3.js";
+import { region3, region3Density, region3DensityByScan, region3Pressure } from "../../../../lib/thermo/water/region3.js";
+import { b23Pressure } from "../../../../lib/thermo/water/boundaries.js";
+import { if97Psat } from "../../../../lib/thermo/water/saturation.js";
 import { ThermoError } from "../../../../lib/thermo/errors.js";
 
 function expect9(calc: number, printed: number): void {
@@ -40,6 +42,40 @@ describe("region3Density", () => {
     expect(rl).toBeGreaterThan(450); // compressed liquid near 640 K is ~ 480-500 kg/m3 (common practice)
     expect(rv).toBeLessThan(200);
     expect(region3Pressure(rv, 640) / p).toBeCloseTo(1, 10);
+  });
+  it("region3Density (Newton) agrees with the grid-scan + Brent reference across region 3 and on the saturation line", () => {
+    // Reference: region3DensityByScan, the solver this one replaced (bracket on a 120/800-point grid, Brent
+    // to 1e-12). Both satisfy p(rho, T) = p; 1e-10 relative leaves room for Brent's own stopping rule.
+    // Within 1e-5 K of T_crit dp/drho -> 0 and both are ill-conditioned: 1e-6 there.
+    const T_CRIT = 647.096; // IF97 Eq. (2)
+    let n = 0;
+    for (let T = 623.15; T <= 863.15; T += 4.7) {
+      const pmin = b23Pressure(T);
+      for (let q = 0; q <= 12; q++) {
+        const p = pmin + ((100e6 - pmin) * q) / 12;
+        const branch = T < T_CRIT && p < if97Psat(T) ? "vapor" : "liquid";
+        const ref = region3DensityByScan(p, T, branch);
+        expect(Math.abs(region3Density(p, T, branch) / ref - 1), `T=${T} p=${p} ${branch}`).toBeLessThan(1e-10);
+        n++;
+      }
+    }
+    for (const T of [623.15, 630, 640, 645, 646.5, 647, 647.09, T_CRIT - 1e-4, T_CRIT - 1e-6]) {
+      const ps = if97Psat(T);
+      for (const branch of ["liquid", "vapor"] as const) {
+        const tol = T_CRIT - T < 1e-3 ? 1e-6 : 1e-10;
+        expect(Math.abs(region3Density(ps, T, branch) / region3DensityByScan(ps, T, branch) - 1), `T=${T} ${branch}`).toBeLessThan(tol);
+        n++;
+      }
+    }
+    expect(n).toBeGreaterThan(600);
+  });
+  it("region3Density returns the liquid root above rho_c and the vapour root below it at ps(T) < p_crit", () => {
+    // Below T_crit the saturated liquid is denser than rho_c = 322 kg/m3 and the vapour lighter (IF97 Eq. 4).
+    for (const T of [625, 640, 647]) {
+      const ps = if97Psat(T);
+      expect(region3Density(ps, T, "liquid")).toBeGreaterThan(322);
+      expect(region3Density(ps, T, "vapor")).toBeLessThan(322);
+    }
   });
   it("region3Density throws ThermoError naming p when no root exists", () => {
     expect(() => region3Density(1e3, 700, "liquid")).toThrow(ThermoError);
