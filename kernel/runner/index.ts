@@ -7,7 +7,7 @@ import { basename, extname, join, relative, resolve } from "node:path";
 import { IMPLEMENTATION_VERSION } from "../protocol/index.js";
 import { ArgsError, parseRunArgs, RUN_HELP, type RunArgs } from "./args.js";
 import { executeNotebook, type NotebookKernel } from "./execute.js";
-import { InProcessKernel, ProcessKernel } from "./kernels.js";
+import { InProcessKernel, KernelSupply, ProcessKernel } from "./kernels.js";
 import { parseNotebook, serializeNotebook, withCellIds, type Notebook } from "./notebook.js";
 import { injectOverrides } from "./parameters.js";
 import { Progress } from "./progress.js";
@@ -24,6 +24,8 @@ export interface NotebookOutcome {
   reportPath?: string;
   checks: { total: number; failed: number };
 }
+
+const startKernel = (args: RunArgs): Promise<NotebookKernel> => (args.inProcess ? InProcessKernel.start() : ProcessKernel.start());
 
 /** Notebooks named directly, and the *.ipynb files of named directories (sorted, not recursive). */
 export function expandInputs(inputs: string[]): string[] {
@@ -45,13 +47,13 @@ const titleOf = (nb: Notebook, fallback: string): string => {
   return fallback;
 };
 
-export async function runNotebook(input: string, args: RunArgs, log: (s: string) => void): Promise<NotebookOutcome> {
+export async function runNotebook(input: string, args: RunArgs, log: (s: string) => void, acquire: () => Promise<NotebookKernel> = () => startKernel(args)): Promise<NotebookOutcome> {
   const name = basename(input, extname(input));
   const base: NotebookOutcome = { input, status: "error", message: "", checks: { total: 0, failed: 0 } };
   let kernel: NotebookKernel | undefined;
   try {
     const nb = injectOverrides(parseNotebook(readFileSync(input, "utf8"), input), args.overrides);
-    kernel = args.inProcess ? await InProcessKernel.start() : await ProcessKernel.start();
+    kernel = await acquire();
     const progress = new Progress({ write: log, isTTY: Boolean(process.stderr.isTTY) && args.jobs === 1 }, basename(input), args.quiet);
     const parameters = Object.fromEntries(args.overrides.map((o) => [o.name, o.expression]));
     const run = await executeNotebook(nb, kernel, { progress, timeoutSeconds: args.timeoutSeconds, toolVersion: IMPLEMENTATION_VERSION, parameters });
@@ -100,17 +102,16 @@ function writeIndex(out: string, outcomes: NotebookOutcome[]): string {
   return path;
 }
 
-/** Runs `items` through `work` with at most `limit` at once, keeping input order in the result. */
-async function pool<T, R>(items: T[], limit: number, work: (item: T) => Promise<R>): Promise<R[]> {
+/**
+ * Runs `items` through `work` in `lanes` parallel lanes, keeping input order in the result. Lane k takes
+ * items k, k + lanes, k + 2 lanes ... (a fixed share, so each lane knows how many kernels it will need).
+ */
+async function pool<T, R>(items: T[], lanes: number, work: (item: T, lane: number) => Promise<R>): Promise<R[]> {
   const results: R[] = new Array(items.length);
-  let next = 0;
-  const lanes = Array.from({ length: Math.min(limit, items.length) }, async () => {
-    while (next < items.length) {
-      const i = next++;
-      results[i] = await work(items[i]!);
-    }
+  const runners = Array.from({ length: lanes }, async (_, lane) => {
+    for (let i = lane; i < items.length; i += lanes) results[i] = await work(items[i]!, lane);
   });
-  await Promise.all(lanes);
+  await Promise.all(runners);
   return results;
 }
 
@@ -130,7 +131,15 @@ export async function runCli(argv: string[]): Promise<number> {
     log(`caloric run: ${(e as Error).message}\n`);
     return 64;
   }
-  const outcomes = await pool(inputs, args.jobs, (input) => runNotebook(input, args, log));
+  // One supply per lane: each lane prestarts the kernel for its next notebook.
+  const lanes = Math.min(args.jobs, inputs.length);
+  const supplies = Array.from({ length: lanes }, (_, lane) => new KernelSupply(() => startKernel(args), Math.ceil((inputs.length - lane) / lanes)));
+  let outcomes: NotebookOutcome[];
+  try {
+    outcomes = await pool(inputs, lanes, (input, lane) => runNotebook(input, args, log, () => supplies[lane]!.acquire()));
+  } finally {
+    await Promise.all(supplies.map((s) => s.dispose()));
+  }
   const lines = outcomes.map((o) => `  ${o.status === "passed" ? "PASS" : "FAIL"}  ${o.input}: ${o.message}${o.reportPath ? `\n        report: ${o.reportPath}` : o.notebookPath ? `\n        notebook: ${o.notebookPath}` : ""}`);
   const index = args.html && outcomes.length > 1 ? writeIndex(args.out, outcomes) : undefined;
   const bad = outcomes.filter((o) => o.status !== "passed");

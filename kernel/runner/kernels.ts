@@ -36,6 +36,25 @@ async function loopbackConnection(): Promise<ConnectionInfo> {
   return parseConnectionInfo({ transport: "tcp", ip: "127.0.0.1", shell_port, iopub_port, stdin_port, control_port, hb_port, key: randomUUID(), signature_scheme: "hmac-sha256", kernel_name: "caloric" });
 }
 
+/**
+ * Sends kernel_info until one is answered with its reply and idle status. The IOPub subscription joins
+ * some time after connect, so the first request's status may be missed: resend soon (every 60 ms)
+ * rather than waiting long on a message that will never come.
+ */
+async function waitUntilAnswering(client: KernelClient, timeoutMs: number) {
+  const deadline = Date.now() + timeoutMs;
+  let lastError: unknown;
+  while (Date.now() < deadline) {
+    const id = client.request("shell", "kernel_info_request");
+    try {
+      return (await client.collect(id, 60)).reply;
+    } catch (e) {
+      lastError = e;
+    }
+  }
+  throw new Error(`kernel not ready within ${timeoutMs} ms (${(lastError as Error)?.message ?? "no answer"})`);
+}
+
 const EXECUTE_TIMEOUT_MS = 24 * 3600 * 1000; // the runner's own --timeout governs cells
 
 export class ProcessKernel implements NotebookKernel {
@@ -57,7 +76,7 @@ export class ProcessKernel implements NotebookKernel {
     child.stderr!.on("data", (d: Buffer) => (err = (err + d.toString()).slice(-20_000)));
     const client = await KernelClient.connect(info);
     try {
-      const reply = await client.waitForReady(30_000);
+      const reply = await waitUntilAnswering(client, 30_000);
       return new ProcessKernel(child, client, dir, reply.content as Record<string, unknown>, () => err);
     } catch (e) {
       client.close();
@@ -114,6 +133,40 @@ export function engineOutputEvent(out: EngineOutput): IopubEvent {
         msg_type: out.update ? "update_display_data" : "display_data",
         content: { data: out.bundle, metadata: {}, ...(out.displayId ? { transient: { display_id: out.displayId } } : {}) },
       };
+  }
+}
+
+/**
+ * Hands out kernels one notebook at a time and starts the next one while the current notebook runs, so
+ * with several notebooks the kernel start-up (process, worker, language) is mostly hidden.
+ */
+export class KernelSupply {
+  private next: Promise<NotebookKernel> | undefined;
+  private remaining: number;
+
+  constructor(
+    private readonly start: () => Promise<NotebookKernel>,
+    count: number,
+  ) {
+    this.remaining = count;
+  }
+
+  /** A ready (or starting) kernel; starts the following one in the background if more are needed. */
+  acquire(): Promise<NotebookKernel> {
+    if (this.remaining <= 0) throw new Error("KernelSupply: more kernels asked for than announced");
+    this.remaining--;
+    const current = this.next ?? this.start();
+    this.next = this.remaining > 0 ? this.start() : undefined;
+    // A prestarted kernel that fails is reported when its notebook acquires it, not as an unhandled rejection.
+    this.next?.catch(() => undefined);
+    return current;
+  }
+
+  /** Closes a prestarted kernel nobody will use. */
+  async dispose(): Promise<void> {
+    const spare = this.next;
+    this.next = undefined;
+    if (spare) await spare.then((k) => k.close()).catch(() => undefined);
   }
 }
 

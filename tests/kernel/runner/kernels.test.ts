@@ -1,5 +1,5 @@
 import { describe, expect, it } from "vitest";
-import { engineOutputEvent, InProcessKernel } from "../../../kernel/runner/kernels.js";
+import { engineOutputEvent, InProcessKernel, KernelSupply } from "../../../kernel/runner/kernels.js";
 import type { IopubEvent } from "../../../kernel/runner/outputs.js";
 
 describe("engineOutputEvent", () => {
@@ -25,5 +25,33 @@ describe("InProcessKernel", () => {
     expect(events.at(-1)!.msg_type).toBe("error");
     expect((await k.info()).language_info.name).toBe("caloric");
     await k.close();
+  });
+});
+
+describe("KernelSupply", () => {
+  const fake = (id: number) => ({ id, closed: false, info: async () => ({ language_info: {}, implementation_version: "" }), execute: async () => ({ status: "ok" as const, execution_count: 1 }), interrupt: async () => {}, close: async function (this: { closed: boolean }) { this.closed = true; } });
+  it("KernelSupply starts the next kernel when one is handed out, and no more than announced", async () => {
+    let started = 0;
+    const supply = new KernelSupply(async () => fake(++started), 3);
+    const first = await supply.acquire();
+    expect(started).toBe(2); // the second is already starting while the first notebook runs
+    await supply.acquire();
+    await supply.acquire();
+    expect(started).toBe(3);
+    expect(() => supply.acquire()).toThrow(/more kernels asked for than announced/);
+    expect((first as unknown as { id: number }).id).toBe(1);
+  });
+  it("KernelSupply.dispose closes a prestarted kernel nobody used", async () => {
+    const made: ReturnType<typeof fake>[] = [];
+    const supply = new KernelSupply(async () => { const k = fake(made.length + 1); made.push(k); return k; }, 2);
+    await supply.acquire();
+    await supply.dispose();
+    expect(made[1]!.closed).toBe(true);
+  });
+  it("KernelSupply reports a failed prestart to the notebook that acquires it", async () => {
+    let n = 0;
+    const supply = new KernelSupply(async () => { if (++n === 2) throw new Error("port in use"); return fake(n); }, 2);
+    await supply.acquire();
+    await expect(supply.acquire()).rejects.toThrow("port in use");
   });
 });
