@@ -96,19 +96,34 @@ function rangeCount(args: unknown[], includeEnd: boolean): { count: number; text
 }
 
 /**
- * Guarded replacements for the instance's array builders, to import (override) before the
- * instance is locked. `range` keeps a guarded `transform` (the `a:b` operator includes its end).
+ * The original of `target[name]`, resolved on first use. mathjs builds most functions lazily (an
+ * accessor that runs a factory on first read); keeping the accessor's getter lets a wrapper be
+ * installed now and the original built only if a cell ever calls it (session creation stays cheap).
+ */
+function lazyOriginal(target: object, name: string): () => Fn | undefined {
+  const desc = Object.getOwnPropertyDescriptor(target, name);
+  if (desc === undefined) return () => undefined;
+  if (desc.get === undefined) return () => desc.value as Fn;
+  const get = desc.get.bind(target);
+  let fn: Fn | undefined;
+  return () => (fn ??= get() as Fn);
+}
+
+/**
+ * Guarded replacements for the instance's array builders, to define on the instance (see
+ * mathInstance.defineOnInstance) before it is locked. `range` keeps a guarded `transform` (in
+ * expressions `a:b` and range() include their end).
  */
 export function sizeGuards(math: MathJsInstance): Record<string, Fn> {
-  const m = math as unknown as Record<string, Fn> & { expression: { transform: Record<string, Fn> } };
+  const m = math as unknown as Record<string, Fn> & { expression: { transform: object } };
   const out: Record<string, Fn> = {};
   const guard = (name: string, count: (args: unknown[]) => number, what: (args: unknown[]) => string) => {
-    const original = m[name];
-    if (typeof original !== "function") return;
+    if (!(name in m)) return;
+    const original = lazyOriginal(m, name);
     out[name] = (...args: unknown[]) => {
       const n = count(args);
       if (n > MAX_ELEMENTS) refuse(name, n, what(args));
-      return original(...args);
+      return original()!(...args);
     };
   };
   const sizeText = (args: unknown[]) => `size ${args.filter((a) => typeof a !== "string").map((a) => (Array.isArray(a) || isMatrixLike(a) ? `[${(isMatrixLike(a) ? (a.valueOf() as unknown[]) : a).flat(Infinity).map((v) => compact(num(v))).join(", ")}]` : compact(num(a)))).join(", ")}`;
@@ -126,9 +141,10 @@ export function sizeGuards(math: MathJsInstance): Record<string, Fn> {
   }, (a) => `a ${compact(countOf(a[0]))}-element vector on the diagonal`);
   guard("kron", (a) => countOf(a[0]) * countOf(a[1]), (a) => `${compact(countOf(a[0]))} x ${compact(countOf(a[1]))} elements`);
 
-  const range = m.range;
-  const rangeTransform = m.expression.transform.range;
-  if (typeof range === "function") {
+  if ("range" in m) {
+    const range = lazyOriginal(m, "range");
+    // The transform's own lazy accessor (the one on mathWithTransform only reads this one back).
+    const rangeTransform = lazyOriginal(m.expression.transform, "range");
     const check = (args: unknown[], includeEnd: boolean) => {
       const { count, text } = rangeCount(args, includeEnd);
       if (count > MAX_ELEMENTS) {
@@ -137,14 +153,12 @@ export function sizeGuards(math: MathJsInstance): Record<string, Fn> {
     };
     const guarded: Fn = (...args: unknown[]) => {
       check(args, false);
-      return range(...args);
+      return range()!(...args);
     };
-    if (typeof rangeTransform === "function") {
-      guarded.transform = (...args: unknown[]) => {
-        check(args, true);
-        return rangeTransform(...args);
-      };
-    }
+    guarded.transform = (...args: unknown[]) => {
+      check(args, true);
+      return rangeTransform()!(...args);
+    };
     out.range = guarded;
   }
   return out;
