@@ -47,10 +47,14 @@ const isCollection = (x: unknown): boolean => Array.isArray(x) || isMatrix(x);
  */
 export function installOffsetPolicy(math: MathJsInstance): void {
   const m = math as unknown as Record<string, (...args: unknown[]) => unknown>;
-  const orig = Object.fromEntries(
-    ["add", "subtract", "multiply", "divide", "dotMultiply", "dotDivide", "pow", "dotPow", "sum", "mean",
-     "compare", "equal", "unequal", "larger", "largerEq", "smaller", "smallerEq", "cbrt"].map((n) => [n, m[n]!]),
-  );
+  // The originals, each built on first use: mathjs creates functions lazily (an accessor running a
+  // factory on first read), and reading all eighteen here cost about 25 ms of session creation for
+  // functions most cells never call (dotPow, mean, compare ...).
+  const orig: Record<string, (...args: unknown[]) => unknown> = {};
+  for (const n of ["add", "subtract", "multiply", "divide", "dotMultiply", "dotDivide", "pow", "dotPow", "sum", "mean",
+    "compare", "equal", "unequal", "larger", "largerEq", "smaller", "smallerEq", "cbrt"]) {
+    Object.defineProperty(orig, n, { get: lazyOriginal(m, n), enumerable: true });
+  }
 
   const sumLike = (op: "add" | "subtract"): Binary => {
     const scalar: Binary = (a, b) =>
@@ -143,5 +147,27 @@ export function installOffsetPolicy(math: MathJsInstance): void {
   for (const n of ["compare", "equal", "unequal", "larger", "largerEq", "smaller", "smallerEq"]) {
     overrides[n] = math.typed(n, { "any, any": compareLike(n) });
   }
-  math.import(overrides, { override: true });
+  for (const [name, fn] of Object.entries(overrides)) replaceFunction(math, name, fn);
+}
+
+/** A getter for the original `target[name]`, resolving mathjs's lazy accessor only when first read. */
+function lazyOriginal(target: object, name: string): () => (...args: unknown[]) => unknown {
+  const desc = Object.getOwnPropertyDescriptor(target, name);
+  if (desc?.get === undefined) return () => desc?.value as (...args: unknown[]) => unknown;
+  const get = desc.get.bind(target);
+  let fn: ((...args: unknown[]) => unknown) | undefined;
+  return () => (fn ??= get() as (...args: unknown[]) => unknown);
+}
+
+/**
+ * What math.import(..., {override: true}) does for a function without a transform, minus reading
+ * the old value (which would build it): the instance and the namespace expressions compile against
+ * get `fn`; mathjs's transform of that name (sum and mean have one) is dropped, as import drops it.
+ */
+function replaceFunction(math: MathJsInstance, name: string, fn: unknown): void {
+  const expression = (math as unknown as { expression: { transform: Record<string, unknown>; mathWithTransform: object } }).expression;
+  const put = (target: object) => Object.defineProperty(target, name, { value: fn, writable: true, configurable: true, enumerable: true });
+  put(math);
+  delete expression.transform[name];
+  put(expression.mathWithTransform);
 }
