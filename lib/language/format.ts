@@ -8,6 +8,7 @@ import { MIME, type MimeBundle } from "../display/index.js";
 import { isRichValue } from "./values/rich.js";
 import { isQuantityColumn } from "./values/column.js";
 import type { UnitsBridge } from "./unitsBridge.js";
+import { autoNumberText } from "./numberText.js";
 
 const PRECISION = 6;
 /** Arrays longer than this print their head and tail only. */
@@ -21,7 +22,8 @@ export interface Formatter {
 const escapeHtml = (s: string) => s.replace(/&/g, "&amp;").replace(/</g, "&lt;").replace(/>/g, "&gt;");
 
 export function createFormatter(math: MathJsInstance, units: UnitsBridge): Formatter {
-  const num = (x: number) => math.format(x, { precision: PRECISION, lowerExp: -4, upperExp: 9 });
+  // Same text as math.format with these options (numberText.ts), without its per-call cost.
+  const num = (x: number) => autoNumberText(x, PRECISION, -4, 9) ?? math.format(x, { precision: PRECISION, lowerExp: -4, upperExp: 9 });
 
   const isRecord = (v: unknown): v is Record<string, unknown> =>
     typeof v === "object" && v !== null && Object.getPrototypeOf(v) === Object.prototype && !isRichValue(v);
