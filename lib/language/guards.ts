@@ -6,7 +6,8 @@
  * what the limit is. Everything else goes to the original mathjs function unchanged.
  *
  * Guarded: the range operator `a:b`, `a:step:b` and range(), zeros, ones, identity, random and
- * randomInt with a size, resize, matrixFromFunction, diag of a vector, kron.
+ * randomInt with a size, resize, matrixFromFunction, diag of a vector, kron, concat. Not guarded:
+ * products that broadcast or multiply a column by a row (an n x 1 times a 1 x n matrix).
  */
 import type { MathJsInstance } from "mathjs";
 import { ArgumentError } from "./builtins/bind.js";
@@ -141,6 +142,18 @@ export function sizeGuards(math: MathJsInstance): Record<string, Fn> {
   }, (a) => `a ${compact(countOf(a[0]))}-element vector on the diagonal`);
   guard("kron", (a) => countOf(a[0]) * countOf(a[1]), (a) => `${compact(countOf(a[0]))} x ${compact(countOf(a[1]))} elements`);
 
+  // concat has a transform (its dimension argument counts from 1 in cells): guard both.
+  if ("concat" in m) {
+    const concat = lazyOriginal(m, "concat");
+    const concatTransform = lazyOriginal(m.expression.transform, "concat");
+    const check = (args: unknown[]) => {
+      const n = args.reduce((sum: number, a) => sum + (Array.isArray(a) || isMatrixLike(a) ? countOf(a) : 0), 0);
+      if (n > MAX_ELEMENTS) refuse("concat", n, `joining ${args.filter((a) => Array.isArray(a) || isMatrixLike(a)).length} arrays`);
+    };
+    const guarded: Fn = (...args: unknown[]) => (check(args), concat()!(...args));
+    guarded.transform = (...args: unknown[]) => (check(args), concatTransform()!(...args));
+    out.concat = guarded;
+  }
   if ("range" in m) {
     const range = lazyOriginal(m, "range");
     // The transform's own lazy accessor (the one on mathWithTransform only reads this one back).

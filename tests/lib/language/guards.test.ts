@@ -34,12 +34,15 @@ describe("sizeGuards", () => {
     expect(run("resize([1], [1e9])")).toMatch(/resize\(\): size \[1e9\]/);
     expect(run("diag(1:1e4)")).toMatch(/diag\(\): .* 1e8 elements/);
     expect(run("kron(1:1e4, 1:1e4)")).toMatch(/kron\(\): .* 1e8 elements/);
+    expect(run("a = 1:6e6; concat(a, a)")).toMatch(/concat\(\): joining 2 arrays would make 1.2e7 elements/);
   });
   it("sizeGuards keep small matrices working", () => {
     expect(run("ones(2, 3)")).toBe("[[1, 1, 1],\n [1, 1, 1]]");
     expect(run("identity(2)")).toBe("[[1, 0],\n [0, 1]]");
     expect(run("size(zeros(10, 10))")).toBe("[10, 10]");
     expect(run("diag([1, 2])")).toBe("[[1, 0],\n [0, 2]]");
+    expect(run("concat([[1, 2]], [[3, 4]], 1)")).toBe("[[1, 2],\n [3, 4]]"); // in cells the dimension counts from 1
+    expect(run("concat([1], [2, 3])")).toBe("[1, 2, 3]");
   });
   it("compact writes counts exactly and briefly", () => {
     expect(compact(1e9)).toBe("1e9");
