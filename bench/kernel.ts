@@ -1,7 +1,8 @@
 /**
  * npm run bench:kernel — cold start and execute round trip of the compiled kernel, measured by the
  * shared kernel_probe.py in one run against (a) the reference Python kernel (kernelspec python3) and
- * (b) empty_kernel.py (the floor ZeroMQ and the client impose). Prints the ratios; asserts nothing.
+ * (b) empty_kernel.py (the floor ZeroMQ and the client impose), plus the cold start against
+ * kernelFloor.js (the least a Node kernel can do before kernel_info). Prints the ratios; asserts nothing.
  * Targets (issue 2): cold start <= 0.2x the Python kernel's, round trip <= 1.25x the empty kernel's.
  */
 import { execFileSync } from "node:child_process";
@@ -30,7 +31,10 @@ function runProbe(compare: string[]): Record<string, any> {
   return result;
 }
 
+const floor = join(root, "dist", "bench", "kernelFloor.js");
 const vsPython = runProbe(["--compare", "python3"]);
+// Cold start only, against the least a Node kernel can do (bench/kernelFloor.ts): what is ours to cut.
+const vsFloor = runProbe(["--compare-argv", `${process.execPath} ${floor} {connection_file}`, "--skip-exec"]);
 const vsEmpty = runProbe(["--compare-argv", `/usr/bin/python3 ${empty} {connection_file}`]);
 const ms = (r: Record<string, any>, k: string, ...path: string[]) => path.reduce((o, p) => o?.[p], r.kernels[k]) as number;
 
@@ -44,6 +48,8 @@ console.log(`cold start to kernel_info_reply (median): caloric ${coldCaloric.toF
 const readyCaloric = ms(vsPython, "A", "cold_start", "ready", "median");
 const readyPython = ms(vsPython, "B", "cold_start", "ready", "median");
 console.log(`cold start to ready (reply and an iopub status, median): caloric ${readyCaloric.toFixed(0)} ms, python kernel ${readyPython.toFixed(0)} ms -> ratio ${(readyCaloric / readyPython).toFixed(3)}`);
+const coldVsFloor = [ms(vsFloor, "A", "cold_start", "kernel_info_reply", "median"), ms(vsFloor, "B", "cold_start", "kernel_info_reply", "median")];
+console.log(`cold start vs the Node floor (kernelFloor.js, median): caloric ${coldVsFloor[0]!.toFixed(0)} ms, floor ${coldVsFloor[1]!.toFixed(0)} ms -> ratio ${(coldVsFloor[0]! / coldVsFloor[1]!).toFixed(3)}`);
 console.log(`execute round trip of 1+1 (median): caloric ${rtCaloric.toFixed(2)} ms, empty kernel ${rtEmpty.toFixed(2)} ms -> ratio ${(rtCaloric / rtEmpty).toFixed(3)} (target <= 1.25)`);
 console.log(`execute round trip vs python kernel: ${(ms(vsPython, "A", "round_trip", "rt", "median") / rtPython).toFixed(3)} (python ${rtPython.toFixed(2)} ms)`);
 console.log(`protocol checks (caloric): ${JSON.stringify(vsEmpty.kernels.A.protocol_checks)}`);
