@@ -23,9 +23,21 @@ interface UnitClass {
 
 const INSTALLED = Symbol.for("caloric.units.parseCache");
 
+/** Cache key for a parse call, or undefined when the call must not be cached. */
+function keyOf(str: unknown, options: unknown): string | undefined {
+  if (typeof str !== "string") return undefined;
+  if (options === undefined) return `-${str}`;
+  if (typeof options !== "object" || options === null) return undefined;
+  const keys = Object.keys(options);
+  const allow = (options as { allowNoUnits?: unknown }).allowNoUnits;
+  if (keys.length === 1 && keys[0] === "allowNoUnits" && typeof allow === "boolean") return `${allow ? "a" : "n"}${str}`;
+  return undefined;
+}
+
 /**
- * Wrap `math.Unit.parse` with a bounded cache of parsed strings (clones handed out). Only calls
- * without options are cached: options change the result. Idempotent per instance.
+ * Wrap `math.Unit.parse` with a bounded cache of parsed strings (clones handed out). Calls without
+ * options, and with only `allowNoUnits` (what math.unit("J/mol") passes), are cached under keys
+ * that tell them apart; any other options go straight to mathjs. Idempotent per instance.
  */
 export function installParseCache(math: MathJsInstance): void {
   const Unit = (math as unknown as { Unit: UnitClass & { [INSTALLED]?: true } }).Unit;
@@ -33,12 +45,13 @@ export function installParseCache(math: MathJsInstance): void {
   const parse = Unit.parse.bind(Unit);
   const cache = new Map<string, Unit>();
   Unit.parse = (str: string, options?: unknown): Unit => {
-    if (options !== undefined || typeof str !== "string") return parse(str, options);
-    let hit = cache.get(str);
+    const key = keyOf(str, options);
+    if (key === undefined) return parse(str, options);
+    let hit = cache.get(key);
     if (hit === undefined) {
-      hit = parse(str); // throws for unknown units: errors are never cached
+      hit = parse(str, options); // throws for unknown units: errors are never cached
       if (cache.size >= PARSE_CACHE_LIMIT) cache.clear();
-      cache.set(str, hit);
+      cache.set(key, hit);
     }
     return hit.clone();
   };

@@ -45,3 +45,17 @@ describe("installParseCache", () => {
     expect(math.unit("2 psi").toNumber("Pa")).toBeCloseTo(13789.514, 2); // psi = 6894.757 Pa (NIST SP 811 B.8, 7 significant figures)
   });
 });
+
+describe("installParseCache with options", () => {
+  it("installParseCache keeps calls with and without allowNoUnits apart", () => {
+    const math = mathWithUnits();
+    const U = (math as unknown as { Unit: UnitClass }).Unit;
+    expect(U.parse("5", { allowNoUnits: true }).toNumber()).toBe(5); // a bare number is allowed here
+    expect(() => U.parse("5")).toThrow(); // and refused without the option, cache or not
+    expect(U.parse("5", { allowNoUnits: true }).toNumber()).toBe(5);
+    // math.unit("J/mol") parses with allowNoUnits: 1 kJ/mol = 1000 J/mol (SI prefix kilo)
+    expect(math.unit("J/mol").equalBase(math.unit("kJ/mol"))).toBe(true);
+    expect(math.unit("2 kJ/mol").toNumber("J/mol")).toBeCloseTo(2000, 9);
+    expect(math.unit("2 kJ/mol").toNumber("J/mol")).toBeCloseTo(2000, 9);
+  });
+});
