@@ -1,5 +1,6 @@
 import { describe, expect, it } from "vitest";
-import { change, state, stateFrom, type IdealGasFunctions } from "../../../lib/thermo/state.js";
+import { change, state, twoPhase, type IdealGasFunctions } from "../../../lib/thermo/state.js";
+import { stateFrom } from "../../../lib/thermo/spec/stateFrom.js";
 import { integrate } from "../../../lib/numerics/index.js";
 import { pr, pureFluid, psat, R } from "../../../lib/thermo/index.js";
 import { butane, methane } from "./fixtures.js";
@@ -53,6 +54,13 @@ describe("stateFrom", () => {
   it("stateFrom needs exactly two properties and ideal-gas totals for H, S, U", () => {
     expect(() => stateFrom(m, { T: 300 })).toThrow(/exactly two/);
     expect(() => stateFrom(m, { T: 300, H: 1000 })).toThrow(/idealGas/);
+  });
+  it("twoPhase mixes saturated liquid and vapour by the lever rule", () => {
+    const s = psat(m, 350);
+    const t = twoPhase(m, s, 0.4, ig);
+    expect(t.V).toBeCloseTo(0.6 * s.VL + 0.4 * s.VV, 15);
+    expect(t.HR).toBeCloseTo(0.6 * s.liquid.HR + 0.4 * s.vapor.HR, 9);
+    expect(t.phase).toBe("two-phase");
   });
   it("change refuses states with different references naming s2", () => {
     const a = state(m, 300, 1e5, { idealGas: ig });
