@@ -65,18 +65,25 @@ function validate(c: CheckInput): void {
 
 interface Parts { record: CheckRecord; rule: string; dev: string }
 
+/**
+ * Tolerances and deviations are differences: in an offset unit (degC, barg ...) they are written in
+ * the unit of the same size without the offset, so "+5 K" is never read as 5 degC = 278.15 K.
+ */
+const DIFFERENCE_UNIT: Readonly<Record<string, string>> = { degC: "K", degF: "deltaF", barg: "bar", psig: "psi", kPag: "kPa", MPag: "MPa" };
+
 function parts(c: CheckInput): Parts {
   validate(c);
   const comparison = c.comparison ?? "within";
   const pass = c.pass ?? evaluateCheck(c.value, c.target, c.tolerance, comparison);
   const unit = c.unit ?? "";
   const u = unit ? ` ${unit}` : "";
+  const du = unit ? ` ${DIFFERENCE_UNIT[unit] ?? unit}` : "";
   const deviation = c.value - c.target;
   const rule =
-    comparison === "within" ? `target ${shortNumber(c.target)}${u} ± ${shortNumber(c.tolerance)}${u}`
-    : comparison === "atmost" ? `limit at most ${shortNumber(c.target)}${u}${c.tolerance ? ` (+${shortNumber(c.tolerance)}${u})` : ""}`
-    : `limit at least ${shortNumber(c.target)}${u}${c.tolerance ? ` (-${shortNumber(c.tolerance)}${u})` : ""}`;
-  const dev = `${deviation >= 0 ? "+" : ""}${shortNumber(deviation)}${u}`;
+    comparison === "within" ? `target ${shortNumber(c.target)}${u} ± ${shortNumber(c.tolerance)}${du}`
+    : comparison === "atmost" ? `limit at most ${shortNumber(c.target)}${u}${c.tolerance ? ` (+${shortNumber(c.tolerance)}${du})` : ""}`
+    : `limit at least ${shortNumber(c.target)}${u}${c.tolerance ? ` (-${shortNumber(c.tolerance)}${du})` : ""}`;
+  const dev = `${deviation >= 0 ? "+" : ""}${shortNumber(deviation)}${du}`;
   const message = `${pass ? "✔ PASS" : "✘ FAIL"}  ${c.label}: ${shortNumber(c.value)}${u}, ${rule}, deviation ${dev}`;
   const record: CheckRecord = {
     label: c.label, pass, value: c.value, target: c.target, tolerance: c.tolerance, unit, comparison, deviation, message,

@@ -42,6 +42,11 @@ describe("checkBundle", () => {
 
 describe("checkRecord", () => {
   it("checkRecord words limits", () => {
+    // Differences of offset units are written without the offset (degC difference = K; barg difference = bar).
+    expect(checkRecord({ label: "T2", value: 37.5, target: 40, tolerance: 5, unit: "degC" }).message)
+      .toBe("✔ PASS  T2: 37.5 degC, target 40 degC ± 5 K, deviation -2.5 K");
+    expect(checkRecord({ label: "P", value: 95, target: 100, tolerance: 2, unit: "barg", comparison: "atmost" }).message)
+      .toBe("✔ PASS  P: 95 barg, limit at most 100 barg (+2 bar), deviation -5 bar");
     expect(checkRecord({ label: "P", value: 95, target: 100, tolerance: 0, unit: "bar", comparison: "atmost" }).message)
       .toBe("✔ PASS  P: 95 bar, limit at most 100 bar, deviation -5 bar");
   });
