@@ -85,6 +85,13 @@ function explain(err: unknown, text: string, names: NameSource): Located {
   if (/^Units do not match/.test(message)) {
     return { kind: "UnitsError", message: "units do not match: both sides of + or - (or a comparison, or a conversion) must have the same dimension" };
   }
+  if (/^range \S+ has \S+ elements/.test(message)) {
+    // The size guard on `a:b`: point at the colon of the range (or at range( when called by name).
+    const call = findWord(text, "range");
+    const colon = text.replace(/"[^"]*"|'[^']*'/g, (q) => " ".repeat(q.length)).indexOf(":");
+    const at = call >= 0 ? call : colon;
+    return { kind: e?.name === "ArgumentError" ? "ArgumentError" : "Error", message, offset: at, width: call >= 0 ? 5 : 1 };
+  }
   m = /^(?:argument \S+ of |)(\w+)\(\)/.exec(message) ?? /of (\w+)\(\)/.exec(message);
   const kind = e?.name === "UnitsError" ? "UnitsError" : e?.name === "ArgumentError" ? "ArgumentError" : e?.name === "Interrupted" ? "Interrupted" : "Error";
   return { kind, message, offset: m ? findWord(text, m[1]!) : undefined, width: m ? Array.from(m[1]!).length : undefined };

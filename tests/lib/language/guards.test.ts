@@ -11,11 +11,18 @@ const run = (code: string) => {
 
 describe("sizeGuards", () => {
   it("sizeGuards refuse a huge range with its size and the limit", () => {
-    expect(run("1:1e9")).toBe("ArgumentError: range 1:1e9 has 1e9 elements; the limit is 1e7 (line 1, column 1)");
+    expect(run("1:1e9")).toBe("ArgumentError: range 1:1e9 has 1e9 elements; the limit is 1e7 (line 1, column 2)"); // caret on the colon
     expect(run("x = 1:2:1e9")).toMatch(/^ArgumentError: range 1:2:1e9 has 5e8 elements; the limit is 1e7/);
     expect(run("range(1, 1e9)")).toMatch(/range 1:1e9 has 1e9 elements/); // in cells range() includes its end too
     expect(run('range("0:1e8")')).toMatch(/range 0:1e8 has 1.00000001e8 elements/); // 0 to 1e8 inclusive
     expect(run("1:(1e7 + 1)")).toMatch(/has 1.0000001e7 elements/);
+  });
+  it("sizeGuards errors point at the range in the source", () => {
+    const r = s.run("n = 2\nx = 1 + sum(1:1e9)", sink);
+    expect(r.ok).toBe(false);
+    if (!r.ok) expect(r.error.traceback.slice(-2)).toEqual(["    x = 1 + sum(1:1e9)", "                 ^"]);
+    const q = s.run('y = range("1:1e9")', sink);
+    if (!q.ok) expect(q.error.traceback.slice(-1)).toEqual(["        ^^^^^"]);
   });
   it("sizeGuards keep ordinary ranges as mathjs makes them", () => {
     expect(run("1:3")).toBe("[1, 2, 3]"); // the operator includes its end
