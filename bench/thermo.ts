@@ -10,7 +10,7 @@ import { execFileSync } from "node:child_process";
 import { existsSync } from "node:fs";
 import { dirname, resolve } from "node:path";
 import { fileURLToPath, pathToFileURL } from "node:url";
-import { pr, prStateFast, pureFluid, selectRoot } from "../lib/thermo/index.js";
+import { getSubstance, leeKesler, pr, prStateFast, pureFluid, selectRoot } from "../lib/thermo/index.js";
 
 const Tc = 190.564;
 const Pc = 45.992e5;
@@ -67,6 +67,28 @@ function numpyRate(): number | string {
   }
 }
 
+/**
+ * Lee-Kesler cost per state: selectRoot (roots, residual of each root, stable choice) of pure propane
+ * and of a methane/propane 0.7/0.3 mixture (Ploecker rules) over random T in 200-600 K, P in 1-100 bar,
+ * microseconds per state (best of three passes). Measures, never asserts.
+ */
+export function leeKeslerStateTime(n = 2000): { pure: number; mixture: number } {
+  const time = (m: ReturnType<typeof leeKesler>): number => {
+    let best = Infinity;
+    for (let rep = 0; rep < 3; rep++) {
+      const rnd = lcg(3);
+      const t0 = performance.now();
+      for (let i = 0; i < n; i++) selectRoot(m, 200 + 400 * rnd(), 1e5 + 9.9e6 * rnd());
+      best = Math.min(best, (performance.now() - t0) * 1000 / n);
+    }
+    return best;
+  };
+  const pure = time(leeKesler(pureFluid(getSubstance("propane"))));
+  const mixture = time(leeKesler({ components: [getSubstance("methane"), getSubstance("propane")], x: [0.7, 0.3] }));
+  console.log(`Lee-Kesler microseconds per state (selectRoot), pure propane: ${pure.toFixed(2)}, methane/propane mixture: ${mixture.toFixed(2)}`);
+  return { pure, mixture };
+}
+
 export function run(): { node: number; model: number; numpy: number | string } {
   const node = nodeRate(1_000_000).rate;
   const model = modelRate(200_000);
@@ -77,6 +99,7 @@ export function run(): { node: number; model: number; numpy: number | string } {
     console.log(`PR states/s, numpy vectorised (same run):            ${numpy.toExponential(3)}`);
     console.log(`ratio fast path / numpy: ${(node / numpy).toFixed(2)} (target >= 1.5)`);
   } else console.log(numpy);
+  leeKeslerStateTime();
   return { node, model, numpy };
 }
 
