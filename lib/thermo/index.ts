@@ -21,6 +21,8 @@ export { rk, RK } from "./eos/rk.js";
 export { srk, SRK, srkSlope } from "./eos/srk.js";
 export { pr, PR, prKappa } from "./eos/pr.js";
 export { prStateFast } from "./eos/prFast.js";
+export { physicalZRoots } from "./eos/cubicZ.js";
+export { cubicStateColumns, isPureCubic, PHASE_LABELS, STATE_FLAG_BITS, type StateColumns, type ColumnOptions, type ColumnIdealGas } from "./stateColumns.js";
 export {
   selectRoot, pseudoCritical, checkPhase,
   type PhaseRequest, type PhaseLabel, type StateFlags, type RootChoice,
