@@ -17,7 +17,7 @@ export const RPP4_CP =
   "Reid, Prausnitz & Poling, The Properties of Gases and Liquids, 4th ed. (1987), App. A, Cp^ig = A + BT + CT^2 + DT^3 J/(mol K) (from memory)";
 
 export const IAPWS_CRIT =
-  "IAPWS R2-83 critical point of ordinary water (Tc = 647.096 K, Pc = 22.064 MPa, rhoc = 322 kg/m^3); omega and Tb per PGL 5th ed. App. A / IAPWS-95 (from memory)";
+  "IAPWS R2-83 critical point of ordinary water (Tc = 647.096 K, Pc = 22.064 MPa, rhoc = 322 kg/m^3); omega = -1 - log10(Psat(0.7 Tc)/Pc) = 0.3443 and Tb = 373.124 K from the IAPWS-95 saturation curve (IAPWS R6-95, 2018 revision; PGL 5th ed. App. A rounds omega to 0.345) (from memory, checked against python3-iapws)";
 
 export const REFRIG_CP_APPROX =
   "approximate fit (+-3 %) to ideal-gas Cp from the ideal-gas part of the reference equation of state cited for the fluid (from memory)";

@@ -19,6 +19,16 @@ describe("GASES", () => {
     for (const [id, T, v] of ref) expect(Math.abs(cp(get(id), T) / v - 1), `${id} ${T} K`).toBeLessThan(0.03);
   });
 
+  it("GASES Cp/R at 298.15 K equals the Cp298/R column printed beside each Table C.1 row (0.05 %)", () => {
+    // SVNA 7th ed. (2005) Table C.1, column "Cp^ig_298/R" (from memory); catches a mistyped coefficient.
+    const ref: [string, number][] = [
+      ["hydrogen", 3.468], ["nitrogen", 3.502], ["oxygen", 3.535], ["air", 3.509], ["carbon monoxide", 3.507],
+      ["carbon dioxide", 4.467], ["hydrogen sulfide", 4.114], ["sulfur dioxide", 4.796], ["chlorine", 4.082],
+      ["hydrogen chloride", 3.512], ["nitrous oxide", 4.646], ["nitric oxide", 3.59],
+    ];
+    for (const [id, v] of ref) expect(Math.abs(cp(get(id), 298.15) / R / v - 1), id).toBeLessThan(5e-4);
+  });
+
   it("GASES monatomic gases have Cp = 5R/2 (kinetic theory)", () => {
     for (const id of ["argon", "helium", "neon"]) expect(cp(get(id), 500)).toBeCloseTo(2.5 * R, 10);
   });

@@ -1,3 +1,4 @@
+import { spawnSync } from "node:child_process";
 import { describe, expect, it } from "vitest";
 import { R } from "../../../../lib/thermo/constants.js";
 import { cp } from "../../../../lib/thermo/idealGas/cp.js";
@@ -12,6 +13,32 @@ describe("POLAR", () => {
     expect(w.Pc).toBeCloseTo(22.064e6, 0); // IAPWS R2-83
     expect(w.M / w.Vc).toBeCloseTo(322, 0); // rho_c = 322 kg/m^3, IAPWS R2-83
     expect(w.Zc).toBeCloseTo((w.Pc * w.Vc) / (R * w.Tc), 3);
+  });
+
+  it("POLAR Cp/R at 298.15 K equals the Cp298/R column printed beside each Table C.1 row (0.05 %)", () => {
+    // SVNA 7th ed. (2005) Table C.1, column "Cp^ig_298/R" (from memory); catches a mistyped coefficient.
+    const ref: [string, number][] = [["water", 4.038], ["ammonia", 4.269], ["methanol", 5.547], ["ethanol", 8.948]];
+    for (const [id, v] of ref) expect(Math.abs(cp(get(id), 298.15) / R / v - 1), id).toBeLessThan(5e-4);
+  });
+
+  it("POLAR water's omega and Tb are those of IAPWS-95 (python3-iapws): omega = -1 - log10(Psat(0.7 Tc)/Pc)", () => {
+    // Reference library: Debian's python3-iapws (IAPWS95 class). Pitzer's definition of omega evaluated
+    // on the IAPWS-95 saturation curve gives 0.3443 (PGL 5th ed. App. A prints the rounded 0.345);
+    // Tb is the IAPWS-95 saturation temperature at 101325 Pa. Tolerances: 5e-4 in omega (the
+    // record's last digit), 0.005 K in Tb (the record's 3 decimals).
+    const w = get("water");
+    const code = [
+      "import json, math",
+      "from iapws import IAPWS95",
+      `Tc, Pc = ${w.Tc}, ${w.Pc / 1e6}`,
+      "ps = IAPWS95(T=0.7 * Tc, x=0).P",
+      "print(json.dumps([-1 - math.log10(ps / Pc), IAPWS95(P=0.101325, x=0).T]))",
+    ].join("\n");
+    const r = spawnSync("/usr/bin/python3", ["-c", code], { encoding: "utf8" });
+    if (r.status !== 0) throw new Error(`python3-iapws reference failed (apt-get install python3-iapws): ${r.stderr}`);
+    const [omega, Tb] = JSON.parse(r.stdout) as [number, number];
+    expect(Math.abs(w.omega - omega)).toBeLessThan(5e-4);
+    expect(Math.abs(w.Tb - Tb)).toBeLessThan(0.005);
   });
 
   it("POLAR ideal-gas Cp within 3.5 % of JANAF at 300-1000 K", () => {
