@@ -4,6 +4,7 @@
  */
 export { installUnits } from "./install.js";
 export { installOffsetPolicy, containsOffset } from "./arithmetic.js";
+export { installOffsetConversion } from "./offsetTo.js";
 export { ADDED_UNITS, type AddedUnit, R_GAS, ATM_PA, PSI_PA } from "./catalog.js";
 export { DIMENSIONS, type Dimension, type DimensionName, dimensionOf, hasDimension, isDimensionName } from "./dimensions.js";
 export { toSI, scalarSI, fromSI, fromSIArray, describeValue } from "./convert.js";

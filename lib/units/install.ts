@@ -1,10 +1,12 @@
 /**
  * installUnits(math): the one call lib/language makes on a fresh mathjs instance, before locking it:
- * adds the practitioner's units (catalog.ts), the offset-unit policy (arithmetic.ts) and a cache of
+ * adds the practitioner's units (catalog.ts), the offset-unit policy (arithmetic.ts), conversion of
+ * compound values into offset units (offsetTo.ts) and a cache of
  * parsed unit strings (parseCache.ts; evaluation and display parse the same few units over and over).
  */
 import type { MathJsInstance } from "mathjs";
 import { installOffsetPolicy } from "./arithmetic.js";
+import { installOffsetConversion } from "./offsetTo.js";
 import { ADDED_UNITS } from "./catalog.js";
 import { installParseCache } from "./parseCache.js";
 
@@ -17,5 +19,6 @@ export function installUnits(math: MathJsInstance): void {
     math.createUnit(u.name, def, { override: u.override === true });
   }
   installOffsetPolicy(math);
+  installOffsetConversion(math);
   installParseCache(math);
 }

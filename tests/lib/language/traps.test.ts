@@ -19,6 +19,11 @@ const ROWS: Row[] = [
   { cell: "14.696 psia to kPa", value: ["kPa", 101.325, 2e-5, "psi = 6894.757 Pa, NIST SP 811 B.8"] },
   { cell: "1 lbmol to mol", value: ["mol", 453.59237, 1e-12, "lb = 0.45359237 kg exactly"] },
   { cell: "span(20 degC, 80 degC, 4)[4] to K", value: ["K", 353.15, 1e-12, "80 + 273.15"] },
+  // A compound temperature or pressure converted into an offset unit (mathjs 15 alone shows 400.908 degC).
+  { cell: "a = 100 bar * 1 m^3 / (8.314462618 J/(mol K) * 3 kmol); a to degC", value: ["degC", 127.758, 1e-5, "PV/(nR) = 400.908 K (python3, CODATA R) - 273.15"] },
+  { cell: "100 bar * 1 m^3 / (8.314462618 J/(mol K) * 3 kmol) in degF", value: ["degF", 261.964, 1e-5, "400.908 K x 9/5 - 459.67 (NIST SP 811)"] },
+  { cell: "1e6 N / (1 m^2) to barg", value: ["barg", 8.98675, 1e-6, "1e6 Pa - 101325 Pa = 898675 Pa gauge"] },
+  { cell: "(1e6 N / (1 m^2)) to psig", value: ["psig", 130.342, 1e-5, "898675 Pa / 6894.757 Pa/psi (NIST SP 811 B.8)"] },
   { cell: "2 * (25 degC)", error: /K|offset|degC/ },
   { cell: "25 degC + 25 degC", error: /.+/ },
   { cell: "span(1 bar, 300 K, 3)", error: /same dimension/ },

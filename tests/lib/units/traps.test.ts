@@ -34,6 +34,12 @@ const rows: Row[] = [
   { expr: "(5 barg) + (2 barg)", error: /adds two absolute gauge pressures/, source: "policy: absolute + absolute has no meaning" },
   { expr: "(5 barg) + (1 bar)", unit: "barg", value: 6, source: "absolute + difference is absolute (arithmetic)" },
   { expr: "8.314462618 J/(mol K) * (25 degC) / (5 barg)", unit: "m^3/mol", value: 0.004122491214495822, source: "ideal gas V = RT/P with 298.15 K, 601325 Pa; scipy.constants R, atm" },
+  // Compound values converted INTO offset units (mathjs 15 alone keeps the SI number: 400.908 degC).
+  { expr: "100 bar * 1 m^3 / (8.314462618 J/(mol K) * 3 kmol)", unit: "degC", value: 127.75785014980909, source: "T = PV/(nR) = 400.90785 K (python3, CODATA R) - 273.15" },
+  { expr: "100 bar * 1 m^3 / (8.314462618 J/(mol K) * 3 kmol)", unit: "degF", value: 261.9641302696563, source: "400.90785 K x 9/5 - 459.67 (NIST SP 811 B.8)" },
+  { expr: "1e6 N / (1 m^2)", unit: "barg", value: 8.98675, source: "(1e6 Pa - 101325 Pa) / 1e5 Pa; 1 atm = 101325 Pa exact" },
+  { expr: "1e6 N / (1 m^2)", unit: "psig", value: 130.34178895469577, source: "(1e6 - 101325) Pa / 6894.757293 Pa/psi (scipy.constants psi)" },
+  { expr: "(1e6 N / (1 m^2) to barg) - (0 barg)", unit: "bar", value: 8.98675, source: "gauge reading minus 0 barg is the same difference" },
   // Offset temperatures.
   { expr: "25 degC + 10 degC", error: /adds two absolute temperatures.*10 K/, source: "policy: absolute + absolute has no meaning" },
   { expr: "(25 degC) - (15 degC)", unit: "K", value: 10, source: "difference of two temperatures is a difference in K (arithmetic)" },

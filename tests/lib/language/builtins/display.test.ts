@@ -95,6 +95,15 @@ describe("verify", () => {
     // 1 psi = 6894.757 Pa (NIST SP 811, B.9) so 1 psi = 0.06894757 bar.
     expect(check('verify("P", 10 bar, 10 bar, 1 psi)').tolerance).toBeCloseTo(0.06894757, 7);
   });
+  it("verify reads a compound temperature or pressure in an offset target unit with its offset", () => {
+    // PV/(nR) = 100e5 Pa x 1 m^3 / (8.314462618 J/(mol K) x 3000 mol) = 400.90785 K = 127.75785 degC
+    // (python3, CODATA 2018 R); mathjs 15 alone read it as 400.908 degC.
+    const c = check('verify("T", 100 bar * 1 m^3 / (8.314462618 J/(mol K) * 3 kmol), 128 degC, 1 K)');
+    expect(c.value).toBeCloseTo(127.75785014980909, 9);
+    expect(c.pass).toBe(true);
+    // 1e6 Pa - 101325 Pa = 8.98675 barg (1 atm = 101325 Pa exact).
+    expect(check('verify("P", 1e6 N / (1 m^2), 9 barg, 0.1 bar)').value).toBeCloseTo(8.98675, 10);
+  });
   it("verify takes a relative tolerance as 2% or \"2%\"", () => {
     expect(check('verify("P", 10.3 bar, 10 bar, 2%)')).toMatchObject({ pass: false, tolerance: 0.2 });
     expect(check('verify("P", 10.1 bar, 10 bar, "2%")').pass).toBe(true);
