@@ -111,11 +111,24 @@ function guarded<T>(fn: string, ctx: BuiltinContext, body: () => T): T {
   }
 }
 
-function probePoint(a: number, b: number): number {
-  if (Number.isFinite(a) && Number.isFinite(b)) return 0.5 * (a + b);
-  if (Number.isFinite(a)) return a + Math.max(Math.abs(a), 1);
-  if (Number.isFinite(b)) return b - Math.max(Math.abs(b), 1);
-  return 0;
+/**
+ * Where f is first called (to learn its output unit): a point strictly inside the range, so a
+ * function defined only there (a molar volume above zero, a pressure above the vapour pressure) is
+ * never probed outside it. Finite bounds: the midpoint. One infinite bound: step from the finite
+ * bound towards the infinite one, by |bound| when moving away from zero (b = 1e-4 -> 2e-4) and by
+ * |bound| / 2 when moving towards it (b = -4 -> -2: same sign as b), by 1 from 0. Either order of
+ * the bounds: the infinite bound's sign gives the direction. Both infinite: 0.
+ */
+export function probePoint(a: number, b: number): number {
+  const fa = Number.isFinite(a);
+  const fb = Number.isFinite(b);
+  if (fa && fb) return 0.5 * (a + b);
+  if (!fa && !fb) return 0;
+  const finite = fa ? a : b;
+  const dir = Math.sign(fa ? b : a);
+  if (finite === 0) return dir;
+  const step = finite * dir > 0 ? Math.abs(finite) : 0.5 * Math.abs(finite);
+  return finite + dir * step;
 }
 
 const F_DOC = "a function of one variable, like f(x) = x^2 or f(P) = V(P)";

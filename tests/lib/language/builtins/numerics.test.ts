@@ -2,6 +2,7 @@ import { describe, expect, it } from "vitest";
 import type { Unit } from "mathjs";
 import { createSession } from "../../../../lib/language/index.js";
 import { createSessionWithInternals } from "../../../../lib/language/createSession.js";
+import { probePoint } from "../../../../lib/language/builtins/numerics.js";
 
 const { session, internals } = createSessionWithInternals({ shouldStop: () => false });
 const sink = { stdout() {}, display() {}, clear() {} };
@@ -51,6 +52,40 @@ describe("integrate (built-in)", () => {
   });
   it("integrate stops on interrupt", () => {
     expect(errorOf("integrate(f(x) = cos(1000 x), 0, 1)", () => true)).toMatch(/interrupt/);
+  });
+});
+
+describe("probePoint", () => {
+  it("probePoint lies strictly inside the range for every order and sign of the bounds", () => {
+    const cases: [number, number][] = [
+      [1, 3], [3, 1], [-2, 5], [0, Infinity], [Infinity, 0], [1e-4, Infinity], [Infinity, 1e-4], [-4, Infinity],
+      [Infinity, -4], [-Infinity, 4], [4, -Infinity], [-Infinity, -1e-4], [-1e-4, -Infinity], [-Infinity, 1e-9],
+    ];
+    for (const [a, b] of cases) {
+      const p = probePoint(a, b);
+      expect(p > Math.min(a, b) && p < Math.max(a, b), `${a}, ${b} -> ${p}`).toBe(true);
+    }
+    expect(probePoint(-Infinity, Infinity)).toBe(0);
+  });
+  it("probePoint keeps the sign of a finite bound next to an infinite one (never crosses zero)", () => {
+    expect(probePoint(Infinity, 4.49e-4)).toBeCloseTo(8.98e-4, 15); // away from zero: b + |b|
+    expect(probePoint(-4, Infinity)).toBe(-2); // towards zero: half way
+    expect(probePoint(4, -Infinity)).toBe(2);
+    expect(probePoint(-Infinity, -1e-4)).toBe(-2e-4);
+  });
+});
+
+describe("integrate with an infinite lower bound and a small upper bound", () => {
+  it("integrate(f(v) = internal_pressure(m, T, v), Infinity, V) for van der Waals gives U^R = -a/V", () => {
+    // van der Waals: (dU/dV)_T = a/V^2, so U^R = integral from infinity to V of a/v^2 dv = -a/V with
+    // a = 27 R^2 Tc^2 / (64 Pc) (Smith, Van Ness & Abbott 7th ed., Table 3.1 and eq. 6.40, from memory).
+    // Before the fix f was probed at V - 1 m^3/mol (negative volume) and the call failed.
+    const { session: s, internals: inner } = createSessionWithInternals({ shouldStop: () => false });
+    const r = s.run('m = vdw("methane"); V = volume(m, 300 K, 50 bar); u = integrate(f(v) = internal_pressure(m, 300 K, v), Infinity, V); Tc = m.Tc; Pc = m.Pc;', sink);
+    expect(r.ok ? "" : r.error.evalue).toBe("");
+    const num = (n: string, unit: string) => (inner.scope.get(n) as Unit).toNumber(unit);
+    const a = (27 * R ** 2 * num("Tc", "K") ** 2) / (64 * num("Pc", "Pa"));
+    expect(Math.abs(num("u", "J/mol") / (-a / num("V", "m^3/mol")) - 1)).toBeLessThan(1e-8);
   });
 });
 
