@@ -22,6 +22,7 @@ import { LanguageError, translateError } from "./errors.js";
 import { completeAt } from "./complete.js";
 import { inspectAt } from "./inspect.js";
 import { isCompleteCell } from "./isComplete.js";
+import { constantValues } from "./constants.js";
 import type { CellSink, RunResult, Session, SessionOptions } from "./session.js";
 
 /** Deeper bracket nesting is refused before parsing (mathjs parses recursively). */
@@ -47,6 +48,8 @@ export interface SessionInternals {
   units: UnitsBridge;
   /** The private parser (expressions cannot reach it). */
   parse(code: string): MathNode;
+  /** The predefined constants' values as the session started (see constants.ts). */
+  predefined: ReadonlyMap<string, unknown>;
 }
 
 /**
@@ -71,7 +74,10 @@ export function createSessionWithInternals(
   const units = createUnitsBridge(math);
   const column = createColumnFactory(math);
   const formatter = createFormatter(math, units);
-  const scope = new Map<string, unknown>();
+  // Predefined constants (R) are ordinary variables; `predefined` remembers the exact objects so
+  // inspect can tell whether a name still holds its predefined value.
+  const predefined = constantValues(math);
+  const scope = new Map<string, unknown>(predefined);
   // Display ids shown in the current cell: a value carrying one was already shown (progressive output).
   const shownIds = new Set<string>();
   // Shows the previous statement's value before a display made by a later statement (show, progress
@@ -181,7 +187,7 @@ export function createSessionWithInternals(
     }
   };
 
-  const internals: SessionInternals = { math, scope, registry, knownNames, unitNames, formatText: formatter.text, units, parse };
+  const internals: SessionInternals = { math, scope, registry, knownNames, unitNames, formatText: formatter.text, units, parse, predefined };
   const session: Session = {
     run,
     evaluateExpression: (expression) => run(expression, SILENT_SINK),

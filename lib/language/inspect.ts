@@ -7,6 +7,7 @@ import type { InspectResult } from "./session.js";
 import type { SessionInternals } from "./createSession.js";
 import { signatureOf, type BuiltinDef } from "./builtins/define.js";
 import { codePointToOffset } from "./statements.js";
+import { CONSTANTS } from "./constants.js";
 
 const escapeHtml = (s: string) => s.replace(/&/g, "&amp;").replace(/</g, "&lt;").replace(/>/g, "&gt;");
 
@@ -47,7 +48,13 @@ export function inspectAt(internals: SessionInternals, code: string, cursorPos: 
   if (!name) return { found: false };
   if (internals.scope.has(name)) {
     const value = internals.scope.get(name);
-    return { found: true, bundle: { [MIME.text]: `${name} = ${internals.formatText(value)}` } };
+    const shown = `${name} = ${internals.formatText(value)}`;
+    const constant = CONSTANTS.find((c) => c.name === name);
+    if (constant !== undefined && internals.predefined.get(name) === value) {
+      const text = `${shown}\n\n${constant.doc}\nSource: ${constant.source}`;
+      return { found: true, bundle: { [MIME.text]: text, [MIME.html]: `<pre>${escapeHtml(text)}</pre>` } };
+    }
+    return { found: true, bundle: { [MIME.text]: shown } };
   }
   const def = internals.registry.get(name);
   if (def) {
