@@ -39,7 +39,9 @@ export const ALKANES: readonly Substance[] = [
     cp: cpTableC1(3.570, 62.127, -19.486, 0, 1500, SVNA_C1), source: SVNA_B1 },
   { id: "n-octane", name: "n-Octane", formula: "C8H18", aliases: ["octane", "nC8", "n-C8"], cas: "111-65-9",
     M: 114.231, omega: 0.4, Tc: 568.7, Pc_bar: 24.90, Zc: 0.256, Vc_cm3: 486.0, Tb: 398.8,
-    cp: cpTableC1(4.108, 70.567, -22.208, 0, 1500, SVNA_C1), source: SVNA_B1 },
+    // A = 4.108, not the 8.163 printed in some printings and reproductions of Table C.1: 8.163 contradicts the
+    // table's own Cp298/R column (23.174) and the series (A rises about 0.54 per CH2), and gives Cp 20 % high.
+    cp: cpTableC1(4.108, 70.567, -22.208, 0, 1500, `${SVNA_C1}; A = 4.108 in place of the misprinted 8.163 (consistent with the printed Cp298/R = 23.174)`), source: SVNA_B1 },
   { id: "isooctane", name: "Isooctane", formula: "i-C8H18", aliases: ["iC8", "2,2,4-trimethylpentane"], cas: "540-84-1",
     M: 114.231, omega: 0.303, Tc: 543.8, Pc_bar: 25.68, Zc: 0.266, Vc_cm3: 468.0, Tb: 372.39,
     cp: cpCubic(-7.461, 7.787e-1, -4.287e-4, 9.173e-8, 273, 1500, RPP4_CP), source: PGL5_A },
