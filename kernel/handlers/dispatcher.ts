@@ -44,7 +44,8 @@ export class Dispatcher {
         return;
       }
       replied = true;
-      await outbox.send(channel, makeReply(request, replyType, content, services.identity, metadata));
+      // Not awaiting the socket: the send queue keeps the order, and idle (on iopub) need not wait for it.
+      void outbox.send(channel, makeReply(request, replyType, content, services.identity, metadata));
     };
     void publish("status", { execution_state: "busy" });
     const handler = Object.hasOwn(handlers, msgType) ? handlers[msgType] : undefined;
