@@ -3,7 +3,9 @@
  * record of quantities (scalar call) or one record of compact columns (vectorised call). The field
  * names and their dimensions are the product's interface (DESIGN.md section 4).
  */
-import { heatCapacity, state as thermoState, type ThermoState } from "../../thermo/index.js";
+import {
+  PHASE_LABELS, STATE_FLAG_BITS, cubicStateColumns, heatCapacity, isPureCubic, state as thermoState, type ThermoState,
+} from "../../thermo/index.js";
 import type { ModelData } from "../values/thermo.js";
 import type { BuiltinContext } from "./define.js";
 import { ArgumentError } from "./bind.js";
@@ -23,16 +25,26 @@ export const STATE_FIELDS: Readonly<Record<string, string>> = {
 };
 const ORDER = ["T", "P", "phase", ...Object.keys(STATE_FIELDS).filter((k) => k !== "T" && k !== "P")];
 
+/** Cautions a state may carry (the same texts for scalar, general and fast vectorised paths). */
+const NOTE = {
+  nearCritical: "near the critical point (|T/Tc - 1| < 0.03, |P/Pc - 1| < 0.1): model errors grow here and small input changes move results a lot",
+  supercritical: "supercritical (T > Tc and P > Pc)",
+  metastable: "metastable root: another root at this T, P has lower Gibbs energy",
+  saturation: "on the saturation line: liquid and vapour roots have equal fugacity",
+  twoPhase: "two-phase (vapour fraction in x): Cp, Cv and w are undefined inside the dome",
+  mixture: "mixture treated as one phase (no phase-split test was made)",
+} as const;
+
 /** Notes from a thermo state's flags, the Cp correlation range and the model's validity range. */
 function notesOf(d: ModelData, s: ThermoState): string[] {
   const notes: string[] = [];
   const f = s.flags;
-  if (f.nearCritical) notes.push("near the critical point (|T/Tc - 1| < 0.03, |P/Pc - 1| < 0.1): model errors grow here and small input changes move results a lot");
-  if (f.supercritical) notes.push("supercritical (T > Tc and P > Pc)");
-  if (f.metastable) notes.push("metastable root: another root at this T, P has lower Gibbs energy");
-  if (f.twoPhase && s.x === undefined) notes.push("on the saturation line: liquid and vapour roots have equal fugacity");
-  if (s.x !== undefined) notes.push("two-phase (vapour fraction in x): Cp, Cv and w are undefined inside the dome");
-  if (f.mixtureSinglePhase) notes.push("mixture treated as one phase (no phase-split test was made)");
+  if (f.nearCritical) notes.push(NOTE.nearCritical);
+  if (f.supercritical) notes.push(NOTE.supercritical);
+  if (f.metastable) notes.push(NOTE.metastable);
+  if (f.twoPhase && s.x === undefined) notes.push(NOTE.saturation);
+  if (s.x !== undefined) notes.push(NOTE.twoPhase);
+  if (f.mixtureSinglePhase) notes.push(NOTE.mixture);
   if (d.noTotals) notes.push(d.noTotals);
   if (d.idealGas) notes.push(...d.idealGas.warnings(s.T));
   if (d.validity) notes.push(...d.validity(s.T, s.P));
@@ -103,8 +115,23 @@ export function recordOf(row: Row, d: ModelData, ctx: BuiltinContext): Record<st
 const NUMERIC = Object.keys(STATE_FIELDS);
 
 /**
+ * ctx.column with the display unit chosen from the largest finite magnitude found by an indexed loop
+ * (the choice displayUnitFor makes from the whole column, which it reaches through an iterator: about
+ * ten times slower over the thirty columns of a 10,000-point state).
+ */
+function columnOf(si: Float64Array, dim: string, ctx: BuiltinContext) {
+  let big = 0;
+  for (let i = 0; i < si.length; i++) {
+    const v = si[i]!;
+    if (v === v && v !== Infinity && v !== -Infinity && Math.abs(v) > big) big = Math.abs(v);
+  }
+  return ctx.column(si, dim, ctx.units.displayUnitFor(Float64Array.of(big), dim));
+}
+
+/**
  * Collects the rows of a vectorised call straight into typed columns (no array of row objects), then
  * builds a record of columns (numbers) and an array (phase); distinct notes are listed once with counts.
+ * `column`, `phaseAt` and `note` fill it without rows (the fast path of stateColumns.ts).
  */
 export function columnCollector(n: number) {
   const cols: Record<string, Float64Array> = {};
@@ -112,6 +139,13 @@ export function columnCollector(n: number) {
   // Notes that differ only in their numbers (Tr = 0.71, 0.72 ...) are one caution: shown once, first instance.
   const groups = new Map<string, { text: string; count: number }>();
   const keyOf = new Map<string, string>();
+  const note = (text: string): void => {
+    let key = keyOf.get(text);
+    if (key === undefined) keyOf.set(text, (key = text.replace(/[-+]?\d[\d.]*(e[-+]?\d+)?/g, "#")));
+    const g = groups.get(key);
+    if (g) g.count++;
+    else groups.set(key, { text, count: 1 });
+  };
   return {
     add(i: number, row: Row): void {
       for (let k = 0; k < NUMERIC.length; k++) {
@@ -121,19 +155,21 @@ export function columnCollector(n: number) {
       }
       phase[i] = String(row.phase ?? "");
       if (typeof row.notes !== "string") return;
-      for (const note of row.notes.split("; ")) {
-        let key = keyOf.get(note);
-        if (key === undefined) keyOf.set(note, (key = note.replace(/[-+]?\d[\d.]*(e[-+]?\d+)?/g, "#")));
-        const g = groups.get(key);
-        if (g) g.count++;
-        else groups.set(key, { text: note, count: 1 });
-      }
+      for (const t of row.notes.split("; ")) note(t);
     },
+    /** A whole numeric column of SI values (field of STATE_FIELDS). */
+    column(key: string, values: Float64Array): void {
+      cols[key] = values;
+    },
+    phaseAt(i: number, label: string): void {
+      phase[i] = label;
+    },
+    note,
     finish(d: ModelData, ctx: BuiltinContext): Record<string, unknown> {
       const out: Record<string, unknown> = {};
       for (const k of ORDER) {
         if (k === "phase") out.phase = phase;
-        else if (cols[k]) out[k] = ctx.column(cols[k]!, STATE_FIELDS[k]!);
+        else if (cols[k]) out[k] = columnOf(cols[k]!, STATE_FIELDS[k]!, ctx);
       }
       Object.assign(out, identity(d));
       if (groups.size > 0) {
@@ -144,6 +180,57 @@ export function columnCollector(n: number) {
       return out;
     },
   };
+}
+
+/**
+ * Fast path of a vectorised state(m, T, P) for a pure fluid by a cubic model: lib/thermo's
+ * cubicStateColumns fills the columns (no row per point), then per-mass values, phi and f follow by
+ * the same arithmetic as rowOf, and notes by the same texts and grouping. Returns undefined when the
+ * model is not a pure cubic, or when a point needs the general path (which then names the error).
+ */
+export function fastEosColumns(d: ModelData, T: Float64Array | number, P: Float64Array | number, n: number, phase: string | undefined, fn: string, ctx: BuiltinContext): Record<string, unknown> | undefined {
+  const eos = d.eos;
+  if (!eos || !isPureCubic(eos)) return undefined;
+  const c = cubicStateColumns(eos, T, P, n, { phase: (phase ?? "stable") as "stable", idealGas: d.idealGas, M: d.M, shouldStop: ctx.shouldStop });
+  if (c.interrupted) throw ctx.interrupted();
+  const at = (x: Float64Array | number, i: number) => (typeof x === "number" ? x : x[i]!);
+  if (c.stoppedAt >= 0) {
+    eosRowAt(d, at(T, c.stoppedAt), at(P, c.stoppedAt), phase, fn); // throws the general path's error
+    return undefined; // the general path accepts the point: let it do the whole call
+  }
+  const M = d.M;
+  const col = columnCollector(n);
+  const map = (src: Float64Array, f: (v: number, i: number) => number) => {
+    const o = new Float64Array(n);
+    for (let i = 0; i < n; i++) o[i] = f(src[i]!, i);
+    return o;
+  };
+  const Tcol = typeof T === "number" ? new Float64Array(n).fill(T) : T.slice();
+  const Pcol = typeof P === "number" ? new Float64Array(n).fill(P) : P.slice();
+  const phi = map(c.lnphi, Math.exp);
+  const set: Record<string, Float64Array> = {
+    T: Tcol, P: Pcol, V: c.V, v: map(c.V, (V) => V / M), rho: map(c.V, (V) => M / V), Z: c.Z,
+    HR: c.HR, SR: c.SR, UR: c.UR, GR: c.GR, AR: c.AR, phi, lnphi: c.lnphi, f: map(phi, (x, i) => x * Pcol[i]!),
+  };
+  if (c.totals) {
+    const t = c.totals;
+    Object.assign(set, { H: t.H, S: t.S, U: t.U, G: t.G, A: t.A, Cp: t.Cp, Cv: t.Cv, w: t.w });
+    for (const k of ["H", "S", "U", "G", "A", "Cp", "Cv"] as const) set[k.toLowerCase()] = map(t[k], (x) => x / M);
+  }
+  for (const [k, v] of Object.entries(set)) col.column(k, v);
+  for (let i = 0; i < n; i++) {
+    col.phaseAt(i, PHASE_LABELS[c.phase[i]!]!);
+    // Notes in notesOf's order.
+    const f = c.flags[i]!;
+    if (f & STATE_FLAG_BITS.nearCritical) col.note(NOTE.nearCritical);
+    if (f & STATE_FLAG_BITS.supercritical) col.note(NOTE.supercritical);
+    if (f & STATE_FLAG_BITS.metastable) col.note(NOTE.metastable);
+    if (f & STATE_FLAG_BITS.twoPhase) col.note(NOTE.saturation);
+    if (d.noTotals) col.note(d.noTotals);
+    if (d.idealGas) for (const w of d.idealGas.warnings(Tcol[i]!)) col.note(w);
+    if (d.validity) for (const w of d.validity(Tcol[i]!, Pcol[i]!)) col.note(w);
+  }
+  return col.finish(d, ctx);
 }
 
 /** Rows -> a record of columns (see columnCollector). */

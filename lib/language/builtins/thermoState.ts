@@ -3,12 +3,13 @@
  * state() takes T and P (scalars, or arrays/spans for a whole curve at the cost of plain-number
  * loops) or a record of any two properties; if97() models route to IAPWS-IF97.
  */
-import { departure as thermoDeparture, maxwellResidual, stateFrom, type Spec } from "../../thermo/index.js";
+import { departure as thermoDeparture, if97Tsat, maxwellResidual, stateFrom, WATER_P_CRIT_MPA, type Spec } from "../../thermo/index.js";
+import { UnitsError } from "../../units/index.js";
 import { modelDataOf, type ModelData } from "../values/thermo.js";
 import { ArgumentError } from "./bind.js";
 import { defineBuiltin, type BuiltinContext, type BuiltinDef } from "./define.js";
 import { guard, lengthOf, pick, requireAllAbove0, siArg } from "./thermoArgs.js";
-import { columnCollector, eosRowAt, recordOf, rowOf } from "./thermoRows.js";
+import { columnCollector, eosRowAt, fastEosColumns, recordOf, rowOf } from "./thermoRows.js";
 import { waterAt, waterDeparture, waterFromSpec, type Row } from "./water.js";
 
 const PHASES = ["stable", "liquid", "vapor", "vapour"];
@@ -17,6 +18,59 @@ const SPEC_DIMS: Record<string, string> = {
   H: "molar_energy", h: "specific_energy", S: "molar_entropy", s: "specific_entropy",
   U: "molar_energy", u: "specific_energy", x: "dimensionless",
 };
+
+/** Keys that take the same property on another basis (molar / per mass / density), and what each means. */
+const SPEC_ALTERNATIVES: Record<string, string[]> = {
+  H: ["h"], h: ["H"], S: ["s"], s: ["S"], U: ["u"], u: ["U"], V: ["v", "rho"], v: ["V", "rho"], rho: ["v", "V"],
+};
+const SPEC_MEANING: Record<string, string> = {
+  H: "a molar enthalpy", h: "a per-mass enthalpy", S: "a molar entropy", s: "a per-mass entropy",
+  U: "a molar internal energy", u: "a per-mass internal energy", V: "a molar volume", v: "a per-mass (specific) volume",
+  rho: "a mass density",
+};
+
+/** One spec value to SI; a wrong dimension that fits another key (H given in kJ/kg) names that key. */
+function specArg(value: unknown, k: string, ctx: BuiltinContext): number | Float64Array {
+  try {
+    return siArg(value, SPEC_DIMS[k]!, k, "state", ctx);
+  } catch (e) {
+    if (!(e instanceof UnitsError) || e.code !== "wrong_dimension") throw e;
+    const fits = (alt: string) => {
+      try {
+        siArg(value, SPEC_DIMS[alt]!, alt, "state", ctx);
+        return true;
+      } catch {
+        return false;
+      }
+    };
+    const alt = (SPEC_ALTERNATIVES[k] ?? []).find(fits);
+    if (alt === undefined) throw e;
+    throw new UnitsError("wrong_dimension", `${e.message}; use ${alt}: for ${SPEC_MEANING[alt]}`);
+  }
+}
+
+/**
+ * IF97 water at (T, P) on a requested phase. IF97 gives only the stable phase; when T is the
+ * saturation temperature at P (to 1e-5 relative, what a typed or computed Tsat carries), the error
+ * shows how to ask for the saturated liquid or vapour instead: {P: .., x: 0} or {P: .., x: 1}.
+ */
+function waterPhaseAt(T: number, P: number, phase: string | undefined, fn: string, ctx: BuiltinContext) {
+  try {
+    return waterAt(T, P, fn, phase);
+  } catch (e) {
+    if (!(e instanceof ArgumentError) || (phase !== "liquid" && phase !== "vapor") || !(P < WATER_P_CRIT_MPA * 1e6)) throw e;
+    let Ts: number;
+    try {
+      Ts = if97Tsat(P);
+    } catch {
+      throw e;
+    }
+    if (!(Math.abs(T / Ts - 1) < 1e-5)) throw e;
+    const p = ctx.units.formatQuantity(ctx.units.fromSI(P, "pressure"));
+    const x = phase === "liquid" ? 0 : 1;
+    throw new ArgumentError(`${e.message}. T is the saturation temperature at this pressure (Tsat = ${Number(Ts.toPrecision(7))} K): for saturated ${phase === "liquid" ? "liquid" : "vapour"} use state(if97(), {P: ${p}, x: ${x}})`);
+  }
+}
 
 const isPlainRecord = (x: unknown): x is Record<string, unknown> =>
   typeof x === "object" && x !== null && Object.getPrototypeOf(x) === Object.prototype && modelDataOf(x) === undefined;
@@ -66,7 +120,7 @@ function stateFromRecord(d: ModelData, record: Record<string, unknown>, ctx: Bui
   }
   if (keys.length !== 2) throw new ArgumentError(`argument spec of state() needs exactly two properties, like {P: 10 bar, H: 5 kJ/mol}; got ${keys.length}: {${keys.join(", ")}}`);
   const inputs: Record<string, number | Float64Array> = {};
-  for (const k of keys) inputs[k] = siArg(record[k], SPEC_DIMS[k]!, k, fn, ctx);
+  for (const k of keys) inputs[k] = specArg(record[k], k, ctx);
   for (const k of ["T", "P", "V", "v", "rho"]) if (inputs[k] !== undefined) requireAllAbove0(fn, k, inputs[k]!, k === "T" ? "K" : k === "P" ? "Pa" : "m^3/mol");
   const point = d.id === "if97"
     ? (a: Record<string, number>) => waterFromSpec({ ...a }, fn)
@@ -108,8 +162,11 @@ export const thermoState: BuiltinDef[] = [
       const inputs = { T: siArg(T, "temperature", "T", "state", ctx), P: siArg(P, "pressure", "P", "state", ctx) };
       requireAllAbove0("state", "T", inputs.T, "K");
       requireAllAbove0("state", "P", inputs.P, "Pa");
+      const n = d.id === "if97" ? undefined : lengthOf("state", inputs);
+      const fast = n === undefined ? undefined : fastEosColumns(d, inputs.T, inputs.P, n, ph, "state", ctx);
+      if (fast) return fast;
       const point = d.id === "if97"
-        ? (a: Record<string, number>) => waterAt(a.T!, a.P!, "state", ph)
+        ? (a: Record<string, number>) => waterPhaseAt(a.T!, a.P!, ph, "state", ctx)
         : (a: Record<string, number>) => eosRowAt(d, a.T!, a.P!, ph, "state");
       return evaluate(d, inputs, point, "state", ctx);
     },

@@ -2,7 +2,9 @@ import { describe, expect, it } from "vitest";
 import type { Unit } from "mathjs";
 import { createSessionWithInternals } from "../../../../lib/language/createSession.js";
 import { isQuantityColumn } from "../../../../lib/language/values/column.js";
-import { getSubstance, pr as prModel, pureFluid, state as thermoState, departure as thermoDeparture } from "../../../../lib/thermo/index.js";
+import {
+  getSubstance, heatCapacity, idealGasFunctions, pr as prModel, pureFluid, state as thermoState, departure as thermoDeparture,
+} from "../../../../lib/thermo/index.js";
 
 const { session, internals } = createSessionWithInternals({ shouldStop: () => false });
 const sink = { stdout() {}, display() {}, clear() {} };
@@ -92,6 +94,104 @@ describe("state", () => {
     expect(errorOf("state(m, {V: 1 L/mol, rho: 2 kg/L})")).toMatch(/same property twice/);
     expect(errorOf("state(m, 300 K)")).toMatch(/missing argument P/);
     expect(errorOf('state("propane", 300 K, 1 bar)')).toMatch(/argument m of state\(\) needs/);
+  });
+});
+
+describe("state heat capacities and speed of sound", () => {
+  const HEAT = ["Cp", "Cv", "cp", "cv", "w"];
+  const M = getSubstance("propane").M;
+  const lib = (T: number, P: number) => {
+    const sub = getSubstance("propane");
+    const mm = prModel(pureFluid(sub));
+    const ig = idealGasFunctions([sub], [1]);
+    const st = thermoState(mm, T, P, { idealGas: ig });
+    return heatCapacity(mm, T, P, st.V, ig.Cp(T), sub.M);
+  };
+
+  it("state records of cubic models carry Cp, Cv, cp, cv, w for scalar calls, equal to the library's heatCapacity (1e-12)", () => {
+    for (const model of ['pr("propane")', 'srk("propane")', 'rk("propane")', 'vdw("propane")']) {
+      const r = value(`state(${model}, 350 K, 10 bar)`) as Record<string, unknown>;
+      for (const k of HEAT) expect(Object.keys(r), `${model} ${k}`).toContain(k);
+    }
+    const h = lib(350, 1e6);
+    expect(rel(num("s.Cp", "J/(mol K)"), h.Cp)).toBeLessThan(1e-12);
+    expect(rel(num("s.Cv", "J/(mol K)"), h.Cv)).toBeLessThan(1e-12);
+    expect(rel(num("s.cp", "J/(kg K)"), h.Cp / M)).toBeLessThan(1e-12);
+    expect(rel(num("s.cv", "J/(kg K)"), h.Cv / M)).toBeLessThan(1e-12);
+    expect(rel(num("s.w", "m/s"), h.w)).toBeLessThan(1e-12);
+  });
+
+  it("state over a span carries Cp, Cv, cp, cv, w columns equal to the library's heatCapacity (liquid, vapour, supercritical)", () => {
+    const c = value("state(m, span(200 K, 600 K, 9), 50 bar)") as Record<string, unknown>;
+    for (const k of HEAT) expect(isQuantityColumn(c[k]), k).toBe(true);
+    const col = (k: string) => (c[k] as { si: Float64Array }).si;
+    for (let i = 0; i < 9; i++) {
+      const h = lib(200 + 50 * i, 5e6);
+      expect(rel(col("Cp")[i]!, h.Cp)).toBeLessThan(1e-12);
+      expect(rel(col("cv")[i]!, h.Cv / M)).toBeLessThan(1e-12);
+      expect(rel(col("w")[i]!, h.w)).toBeLessThan(1e-12);
+    }
+    expect(c.phase).toEqual(["liquid", "liquid", "liquid", "liquid", "supercritical", "supercritical", "supercritical", "supercritical", "supercritical"]);
+  });
+
+  it("state over a span by a pure cubic equals scalar calls element by element across liquid, two roots, vapour and supercritical", () => {
+    // 0.5 bar: every T here is above propane's boiling point at that pressure, so a vapour root exists.
+    const Ts = [250, 300, 330, 360, 369, 371, 420, 700];
+    for (const [P, phase] of [["1 bar", ""], ["20 bar", ""], ["42 bar", ""], ["80 bar", ""], ["0.5 bar", ', "vapor"']]) {
+      {
+        const c = value(`state(srk("propane"), [${Ts.map((t) => `${t} K`).join(", ")}], ${P}${phase})`) as Record<string, unknown>;
+        Ts.forEach((T, i) => {
+          const r = value(`state(srk("propane"), ${T} K, ${P}${phase})`) as Record<string, unknown>;
+          expect((c.phase as string[])[i]).toBe(r.phase);
+          for (const k of ["V", "Z", "H", "S", "G", "HR", "lnphi", "f", "Cp", "w"]) {
+            const a = (c[k] as { si: Float64Array }).si[i]!;
+            const b = typeof r[k] === "number" ? (r[k] as number) : (r[k] as Unit).toSI().toNumber();
+            if (Number.isNaN(b)) expect(Number.isNaN(a), `${T} K ${P} ${k}`).toBe(true);
+            else expect(Math.abs(a - b) / Math.max(Math.abs(b), 1e-3), `${T} K ${P}${phase} ${k}`).toBeLessThan(1e-12);
+          }
+        });
+      }
+    }
+  });
+
+  it("state over a span names the general path's error for a point with no requested root", () => {
+    expect(errorOf('state(m, span(300 K, 400 K, 3), 40 bar, "liquid")')).toMatch(/liquid root asked of a supercritical fluid at T = 400 K > Tc = 369\.8 K/);
+  });
+});
+
+describe("state errors that say what to write instead", () => {
+  it("state(m, {P, H}) with a per-mass enthalpy says to use h:, and the other bases likewise", () => {
+    session.run('g = pr("propane");', sink);
+    expect(errorOf("state(g, {P: 10 bar, H: 500 kJ/kg})")).toMatch(/argument H of state\(\) needs a molar energy.*got 500 kJ \/ kg.*use h: for a per-mass enthalpy/);
+    expect(errorOf("state(g, {P: 10 bar, h: 5 kJ/mol})")).toMatch(/argument h of state\(\).*use H: for a molar enthalpy/);
+    expect(errorOf("state(g, {P: 10 bar, S: 2 kJ/(kg K)})")).toMatch(/argument S of state\(\).*use s: for a per-mass entropy/);
+    expect(errorOf("state(g, {P: 10 bar, s: 2 J/(mol K)})")).toMatch(/use S: for a molar entropy/);
+    expect(errorOf("state(g, {T: 300 K, U: 100 kJ/kg})")).toMatch(/argument U of state\(\).*use u: for a per-mass internal energy/);
+    expect(errorOf("state(g, {T: 300 K, u: 1 kJ/mol})")).toMatch(/use U: for a molar internal energy/);
+    expect(errorOf("state(g, {T: 300 K, V: 2 L/kg})")).toMatch(/argument V of state\(\).*use v: for a per-mass \(specific\) volume/);
+    expect(errorOf("state(g, {T: 300 K, V: 0.5 kg/L})")).toMatch(/use rho: for a mass density/);
+    expect(errorOf("state(g, {T: 300 K, v: 0.1 L/mol})")).toMatch(/argument v of state\(\).*use V: for a molar volume/);
+    expect(errorOf("state(g, {P: 10 bar, H: span(100 kJ/kg, 200 kJ/kg, 3)})")).toMatch(/argument H\[1\] of state\(\).*use h: for a per-mass enthalpy/);
+    // No other key takes a pressure: the plain wrong-dimension error, without a suggestion.
+    const plain = errorOf("state(g, {P: 10 bar, H: 2 bar})");
+    expect(plain).toMatch(/argument H of state\(\) needs a molar energy/);
+    expect(plain).not.toMatch(/use /);
+  });
+
+  it("state(if97(), Tsat, P, phase) asked for the other phase at saturation suggests {P: .., x: 0} or {P: .., x: 1}", () => {
+    session.run("Tb = tsat(if97(), 10 bar);", sink);
+    // IF97 puts T = Tsat(P) itself in one region; whichever it is, asking the other phase is refused with the hint.
+    const phaseAt = value("state(if97(), Tb, 10 bar).phase");
+    const other = phaseAt === "liquid" ? "vapor" : "liquid";
+    const x = other === "liquid" ? 0 : 1;
+    expect(errorOf(`state(if97(), Tb, 10 bar, "${other}")`)).toMatch(new RegExp(`saturation temperature.*use state\\(if97\\(\\), \\{P: 1 MPa, x: ${x}\\}\\)`));
+    // Just across the line (1e-7 relative), the hint shows too.
+    expect(errorOf('state(if97(), Tb * (1 + 1e-7), 10 bar, "liquid")')).toMatch(/x: 0\}/);
+    expect(errorOf('state(if97(), Tb * (1 - 1e-7), 10 bar, "vapor")')).toMatch(/x: 1\}/);
+    // Far from saturation the plain message stays.
+    expect(errorOf('state(if97(), 400 K, 10 bar, "vapor")')).not.toMatch(/saturation temperature/);
+    // The suggested call works and gives the saturated liquid (IAPWS-IF97 Table 35 region: h' at 1 MPa is 762.68 kJ/kg, from memory; 0.1 %).
+    expect(rel(num("state(if97(), {P: 10 bar, x: 0}).h", "kJ/kg"), 762.68)).toBeLessThan(1e-3);
   });
 });
 
