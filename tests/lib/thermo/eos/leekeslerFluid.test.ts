@@ -1,6 +1,6 @@
 import { describe, expect, it } from "vitest";
 import {
-  LK_OMEGA_REFERENCE, LK_REFERENCE, LK_SIMPLE, lkPr, lkProperties, lkRoots, lkZ,
+  LK_OMEGA_REFERENCE, LK_REFERENCE, LK_SIMPLE, lkPr, lkProperties, lkRoots, lkRootsScan, lkZ,
 } from "../../../../lib/thermo/eos/leekeslerFluid.js";
 import { reducedB } from "../../../../lib/thermo/eos/virialCorrelations.js";
 
@@ -34,6 +34,107 @@ describe("lkRoots", () => {
     expect(lkRoots(LK_REFERENCE, 0.8, 0.1)).toHaveLength(2);
     expect(lkRoots(LK_SIMPLE, 1.5, 2)).toHaveLength(1);
     for (const Vr of lkRoots(LK_SIMPLE, 0.7, 0.1)) expect(lkPr(LK_SIMPLE, 0.7, Vr)).toBeCloseTo(0.1, 12);
+  });
+});
+
+/**
+ * Worst disagreement of two roots of the same state: relative difference in Vr, and in Z, HR/RTc, SR/R
+ * and ln phi each divided by its allowance 1e-10 max(|X|, 1e-3) + 1e-13 |Vr dX/dVr|. The second term is
+ * the conditioning: on steep liquid branches Z (evaluated from the equation, as the model does) moves by
+ * 1e-10 relative when Vr moves by a few units in the last place, and both finders stop at that level.
+ * So a result below 1e-10 means identical within 1e-10 relative, up to rounding of the root itself.
+ * A property whose value turns NaN within 1e-9 of the root (ln Z of a liquid at Pr ~ 1e-8) is skipped.
+ */
+function agreement(k: typeof LK_SIMPLE, Tr: number, v: number, w: number): number {
+  let worst = Math.abs(v / w - 1);
+  const a = lkProperties(k, Tr, v);
+  const b = lkProperties(k, Tr, w);
+  const up = lkProperties(k, Tr, v * (1 + 1e-9));
+  const down = lkProperties(k, Tr, v * (1 - 1e-9));
+  for (const key of ["Z", "HRdRTc", "SRdR", "lnphi"] as const) {
+    const slope = Math.abs((up[key] - down[key]) / 2e-9); // |Vr dX/dVr|
+    // ln Z of a liquid root at Pr ~ 1e-8 turns NaN one part in 1e9 away: there only Vr is comparable.
+    if (!Number.isFinite(slope)) continue;
+    const allowance = 1e-10 * Math.max(Math.abs(a[key]), 1e-3) + 1e-13 * slope;
+    worst = Math.max(worst, (1e-10 * Math.abs(a[key] - b[key])) / allowance);
+  }
+  return worst;
+}
+
+/**
+ * Compare lkRoots with the original scan (lkRootsScan) on an nT x nP grid (Tr linear, Pr logarithmic).
+ * Where the scan finds fewer roots it must be its known blind spot: a stable root and the unstable middle
+ * root inside one scan cell (3 % in Vr), so the extra root must solve the equation, be stable, and have
+ * a sign change of Pr - Pr(Vr) within 3 % of it. Returns the worst relative difference in Vr and Z.
+ */
+function compareWithScan(Tr0: number, Tr1: number, Pr0: number, Pr1: number, nT: number, nP: number) {
+  let worst = 0;
+  let extra = 0;
+  for (const k of [LK_SIMPLE, LK_REFERENCE]) {
+    for (let i = 0; i < nT; i++) {
+      for (let j = 0; j < nP; j++) {
+        const Tr = Tr0 + ((Tr1 - Tr0) * i) / (nT - 1);
+        const Pr = Pr0 * (Pr1 / Pr0) ** (j / (nP - 1));
+        const fast = lkRoots(k, Tr, Pr);
+        const scan = lkRootsScan(k, Tr, Pr);
+        const where = `Tr ${Tr} Pr ${Pr} fast ${fast} scan ${scan}`;
+        if (fast.length === scan.length) {
+          fast.forEach((v, q) => worst = Math.max(worst, agreement(k, Tr, v, scan[q]!)));
+          continue;
+        }
+        expect(fast.length, where).toBeGreaterThan(scan.length);
+        for (const v of scan) expect(fast.some((u) => Math.abs(u / v - 1) < 1e-10), where).toBe(true);
+        for (const v of fast.filter((u) => !scan.some((w) => Math.abs(u / w - 1) < 1e-10))) {
+          extra++;
+          expect(Math.abs(lkPr(k, Tr, v) - Pr), where).toBeLessThan(1e-12);
+          expect(lkPr(k, Tr, v * (1 + 1e-6)) - lkPr(k, Tr, v * (1 - 1e-6)), where).toBeLessThan(0);
+          let changes = 0;
+          for (let q = -300; q < 300; q++) {
+            const a = lkPr(k, Tr, v * (1 + q * 1e-4)) - Pr;
+            const b = lkPr(k, Tr, v * (1 + (q + 1) * 1e-4)) - Pr;
+            if (a * b < 0) changes++;
+          }
+          expect(changes, where).toBeGreaterThanOrEqual(1);
+        }
+      }
+    }
+  }
+  return { worst, extra };
+}
+
+describe("lkRoots vs lkRootsScan", () => {
+  it("lkRoots equals the scan on a 70 x 70 grid of Tr 0.3-4, Pr 0.01-10 for both fluids (1e-10 relative in Vr, Z, HR, SR, ln phi)", () => {
+    // Same equation, two root finders: the reference is the project's original scan (kept as fallback).
+    const { worst } = compareWithScan(0.3, 4, 0.01, 10, 70, 70);
+    expect(worst).toBeLessThan(1e-10);
+  });
+
+  it("lkRoots near the critical point (Tr 0.95-1, Pr 0.7-1) agrees with the scan or finds the root pair the scan steps over", () => {
+    const { worst } = compareWithScan(0.95, 1, 0.7, 1, 40, 40);
+    expect(worst).toBeLessThan(1e-10);
+  });
+
+  it("lkRoots outside the tabulated range (Tr 0.05-20, Pr 1e-8-100) still equals the scan", () => {
+    const { worst } = compareWithScan(0.05, 20, 1e-8, 100, 40, 40);
+    expect(worst).toBeLessThan(1e-10);
+  });
+
+  it("lkRoots falls back to the scan for inputs outside its assumptions (Pr <= 0, non-finite)", () => {
+    expect(lkRoots(LK_SIMPLE, 0.7, -0.1)).toEqual(lkRootsScan(LK_SIMPLE, 0.7, -0.1));
+    expect(lkRoots(LK_SIMPLE, NaN, 0.1)).toEqual(lkRootsScan(LK_SIMPLE, NaN, 0.1));
+  });
+
+  it("lkRoots roots solve the equation to 1e-12 in Pr and lie on stable branches (dPr/dVr < 0)", () => {
+    for (const k of [LK_SIMPLE, LK_REFERENCE]) {
+      for (const [Tr, Pr] of [[0.3, 1e-4], [0.5, 5], [0.8, 0.2], [0.99, 0.95], [1.01, 1], [2, 10], [4, 0.01]] as const) {
+        const roots = lkRoots(k, Tr, Pr);
+        expect(roots.length, `${Tr} ${Pr}`).toBeGreaterThan(0);
+        for (const v of roots) {
+          expect(Math.abs(lkPr(k, Tr, v) - Pr), `${Tr} ${Pr}`).toBeLessThan(1e-12 * Math.max(1, Pr));
+          expect(lkPr(k, Tr, v * 1.0001) - lkPr(k, Tr, v * 0.9999), `${Tr} ${Pr}`).toBeLessThan(0);
+        }
+      }
+    }
   });
 });
 
