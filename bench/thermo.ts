@@ -2,7 +2,9 @@
  * Peng-Robinson states per second (Z root + H^R + S^R + ln phi of pure methane over random T, P), the
  * plain library's allocation-free path (prStateFast) side by side, in one run, with the numpy script a
  * Python notebook user would write (../shared/bench/numpy_pr_bench.py, relative to the repository,
- * run by /usr/bin/python3). Also the general pr(fluid) model path for comparison. Measures, never asserts.
+ * run by /usr/bin/python3). Also the column fast path of vectorised state() (cubicStateColumns: the same
+ * four properties plus the other departures, stable-root choice by Gibbs energy and flags, written into
+ * columns) and the general pr(fluid) model path for comparison. Measures, never asserts.
  *   npm run bench            (aggregated by bench/index.ts)
  *   npm run build && node dist/bench/thermo.js
  */
@@ -10,7 +12,7 @@ import { execFileSync } from "node:child_process";
 import { existsSync } from "node:fs";
 import { dirname, resolve } from "node:path";
 import { fileURLToPath, pathToFileURL } from "node:url";
-import { getSubstance, leeKesler, pr, prStateFast, pureFluid, selectRoot } from "../lib/thermo/index.js";
+import { cubicStateColumns, getSubstance, leeKesler, pr, prStateFast, pureFluid, selectRoot } from "../lib/thermo/index.js";
 
 const Tc = 190.564;
 const Pc = 45.992e5;
@@ -42,9 +44,29 @@ function nodeRate(n: number): { rate: number; check: number } {
   return { rate: n / best, check };
 }
 
+const benchMethane = () => ({ id: "methane", name: "methane", formula: "CH4", aliases: [], M: 0.016043, Tc, Pc, Vc: 9.86e-5, Zc: 0.286, omega, Tb: 111.7, cp: { form: "", coefficients: [], Tmin: 0, Tmax: 0, source: "" }, source: "bench" });
+
+function columnRate(n: number): number {
+  const m = pr(pureFluid(benchMethane()));
+  const rnd = lcg(1);
+  const T = new Float64Array(n);
+  const P = new Float64Array(n);
+  for (let i = 0; i < n; i++) {
+    T[i] = 200 + 200 * rnd();
+    P[i] = 1e5 + (1e7 - 1e5) * rnd();
+  }
+  let best = Infinity;
+  for (let rep = 0; rep < 5; rep++) {
+    const t0 = performance.now();
+    const c = cubicStateColumns(m, T, P, n);
+    best = Math.min(best, (performance.now() - t0) / 1000);
+    if (c.stoppedAt >= 0) throw new Error(`column path stopped at ${c.stoppedAt}`);
+  }
+  return n / best;
+}
+
 function modelRate(n: number): number {
-  const sub = { id: "methane", name: "methane", formula: "CH4", aliases: [], M: 0.016043, Tc, Pc, Vc: 9.86e-5, Zc: 0.286, omega, Tb: 111.7, cp: { form: "", coefficients: [], Tmin: 0, Tmax: 0, source: "" }, source: "bench" };
-  const m = pr(pureFluid(sub));
+  const m = pr(pureFluid(benchMethane()));
   const rnd = lcg(2);
   const t0 = performance.now();
   for (let i = 0; i < n; i++) selectRoot(m, 200 + 200 * rnd(), 1e5 + 9.9e6 * rnd());
@@ -89,18 +111,20 @@ export function leeKeslerStateTime(n = 2000): { pure: number; mixture: number } 
   return { pure, mixture };
 }
 
-export function run(): { node: number; model: number; numpy: number | string } {
+export function run(): { node: number; columns: number; model: number; numpy: number | string } {
   const node = nodeRate(1_000_000).rate;
+  const columns = columnRate(1_000_000);
   const model = modelRate(200_000);
   const numpy = numpyRate();
   console.log(`PR states/s, plain library fast path (prStateFast): ${node.toExponential(3)}`);
+  console.log(`PR states/s, column fast path (cubicStateColumns, all departures + flags): ${columns.toExponential(3)}`);
   console.log(`PR states/s, general model path (pr(fluid) + selectRoot): ${model.toExponential(3)}`);
   if (typeof numpy === "number") {
     console.log(`PR states/s, numpy vectorised (same run):            ${numpy.toExponential(3)}`);
-    console.log(`ratio fast path / numpy: ${(node / numpy).toFixed(2)} (target >= 1.5)`);
+    console.log(`ratio fast path / numpy: ${(node / numpy).toFixed(2)} (target >= 1.5); column path / numpy: ${(columns / numpy).toFixed(2)}`);
   } else console.log(numpy);
   leeKeslerStateTime();
-  return { node, model, numpy };
+  return { node, columns, model, numpy };
 }
 
 if (import.meta.url === pathToFileURL(process.argv[1] ?? "").href) run();

@@ -4,9 +4,11 @@
  * fluid so vectorised states do not re-check composition. Mixtures include -R sum x ln x in S.
  */
 import type { Substance } from "../substances/types.js";
-import { cp, cpWarnings } from "./cp.js";
+import { R } from "../constants.js";
+import { requirePositive } from "../errors.js";
+import { cp, cpWarnings, enthalpyIntegral, entropyIntegral } from "./cp.js";
 import { mixtureIdealGasTotals, checkFractions } from "./mixture.js";
-import { DEFAULT_REFERENCE, idealGasTotals, type ReferenceState } from "./reference.js";
+import { DEFAULT_REFERENCE, type ReferenceState } from "./reference.js";
 
 export interface IdealGasClosures {
   /** J/mol against the reference. */
@@ -30,8 +32,12 @@ export function idealGasFunctions(
   if (components.length === 1) {
     const s = components[0]!;
     return {
-      H: (T) => idealGasTotals(s, T, ref.P, ref).H,
-      S: (T, P) => idealGasTotals(s, T, P, ref).S,
+      // The H and S of idealGasTotals without its other fields and range texts (states call these per point).
+      H: (T) => ref.H + enthalpyIntegral(s, ref.T, T),
+      S: (T, P) => {
+        requirePositive("P", P, "Pa");
+        return ref.S + entropyIntegral(s, ref.T, T) - R * Math.log(P / ref.P);
+      },
       Cp: (T) => cp(s, T),
       warnings: (T) => cpWarnings(s, T, ref.T),
       reference: ref.description,
