@@ -16,6 +16,7 @@ import { isRichValue } from "./values/rich.js";
 import { createFormatter } from "./format.js";
 import { scanCell, positionOf } from "./statements.js";
 import { foldConstantQuantities } from "./fold.js";
+import { pinUnitLiterals } from "./literals.js";
 import { pollInFunctionBodies } from "./interruptible.js";
 import { sizeGuards } from "./guards.js";
 import { LanguageError, translateError } from "./errors.js";
@@ -122,9 +123,19 @@ export function createSessionWithInternals(
   interface Compiled { evaluate(scope: Map<string, unknown>): unknown; assigned?: string }
   // Parsed statements by source text: re-running a cell skips the parser.
   const compiled = new Map<string, Compiled>();
-  const UnitClass = (math as unknown as { Unit: Parameters<typeof foldConstantQuantities>[1] }).Unit;
+  const UnitClass = (math as unknown as { Unit: Parameters<typeof pinUnitLiterals>[1] }).Unit;
+  // A literal's unit that is also a variable's name (literals.ts): said once per name and session.
+  const shadowWarned = new Set<string>();
+  const onShadowed = (name: string, literal: string) => {
+    if (shadowWarned.has(name)) return;
+    shadowWarned.add(name);
+    ctx!.warn(
+      `in "${literal}", ${name} is read as the unit ${name}, not as your variable ${name}: a unit name right after a number is always the unit; to multiply by the variable write the * (as in 2 * ${name})`,
+    );
+  };
   const compile = (text: string): Compiled => {
     const node = parse(text) as MathNode & { object?: MathNode & { name?: string } };
+    pinUnitLiterals(node, UnitClass, onShadowed);
     foldConstantQuantities(node, UnitClass);
     pollInFunctionBodies(node, options.shouldStop, () => new Interrupted());
     const code = node.compile() as Compiled;

@@ -13,9 +13,10 @@
  * Staying exact where mathjs's meaning of a name can change:
  * - a unit name that is a function parameter (`f(K) = 5 K`) or a name of the instance is not a
  *   unit there: such a sub-expression is compiled as usual;
- * - a user variable can shadow a unit name later (`K = 3` then `5 K` is 15): each run first checks
- *   the scope for the sub-expression's unit names (a Map lookup each) and evaluates normally if any
- *   is defined;
+ * - a user variable can shadow a unit name later (`K = 3`): each run first checks the scope for the
+ *   sub-expression's unit names (a Map lookup each) and evaluates normally if any is defined (in a
+ *   session, literals.ts has already pinned the units of number-unit literals such as `5 K`, so
+ *   those stay units; a bare `K` is the variable);
  * - a folded quantity is handed out as a clone (some mathjs functions change their argument in
  *   place; cbrt of a negative quantity does).
  */

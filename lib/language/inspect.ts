@@ -66,7 +66,10 @@ export function inspectAt(internals: SessionInternals, code: string, cursorPos: 
     const dim = internals.units.dimensionOf(u);
     const si = dim ? internals.units.siUnitOf(dim) : "";
     const size = si ? u.to(si) : u.toSI();
-    return { found: true, bundle: { [MIME.text]: `${name}: unit${dim ? ` of ${dim.replace(/_/g, " ")}` : ""}, 1 ${name} = ${internals.formatText(size)}` } };
+    const head = `${name}: unit${dim ? ` of ${dim.replace(/_/g, " ")}` : ""}, 1 ${name} = ${internals.formatText(size)}`;
+    // literals.ts: the rule a user needs once a variable takes a unit's name.
+    const rule = `Right after a number (2 ${name}, 2 ${name}^2, 2 ${name}/s) and after to/in, ${name} is always this unit, even when a variable is called ${name}; alone it is the variable, if one exists.`;
+    return { found: true, bundle: { [MIME.text]: `${head}\n${rule}` } };
   }
   return { found: false };
 }

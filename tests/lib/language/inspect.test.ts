@@ -19,6 +19,11 @@ describe("inspect", () => {
     // psia: 6894.757 Pa (NIST SP 811 B.8).
     expect(String(s.inspect("3 psia", 5, 0).bundle?.["text/plain"])).toMatch(/^psia: unit of pressure, 1 psia = 6894.76 Pa/);
   });
+  it("inspect of a unit states that a unit right after a number stays the unit (literals.ts)", () => {
+    const t = String(s.inspect("5 L", 3, 0).bundle?.["text/plain"]);
+    expect(t).toMatch(/^L: unit of volume, 1 L = 0.001 m\^3\n/); // 1 L = 1e-3 m^3 (CGPM 1964)
+    expect(t).toMatch(/Right after a number \(2 L, 2 L\^2, 2 L\/s\) and after to\/in, L is always this unit/);
+  });
   it("inspect finds nothing on blank space outside calls", () => {
     expect(s.inspect("   ", 1, 0).found).toBe(false);
   });
