@@ -3,7 +3,7 @@
  * name the user's argument and function, fluids from names / substances / mixtures, quantities or
  * arrays of quantities to SI numbers (once per array), and the broadcast loop of vectorised calls.
  */
-import { ThermoError, type Fluid } from "../../thermo/index.js";
+import { if97Tsat, ThermoError, WATER_P_CRIT_MPA, type Fluid } from "../../thermo/index.js";
 import { isQuantityColumn } from "../values/column.js";
 import { thermoDataOf } from "../values/thermo.js";
 import { ArgumentError } from "./bind.js";
@@ -92,4 +92,24 @@ export function fluidOf(x: unknown, fn: string, ctx: BuiltinContext, resolve: (x
   if (d?.kind === "substance") return { components: [d.substance], x: [1] };
   if (d?.kind === "mixture") return { components: d.components, x: d.x, ...(d.kij ? { kij: d.kij } : {}) };
   throw new ArgumentError(`argument x of ${fn}() needs a substance name like "methane", a substance(...) or a mixture(...), got ${ctx.textOf(x)}`);
+}
+
+/**
+ * When a phase was asked of IF97 water at its saturation temperature (T = Tsat(P) to 1e-5 relative,
+ * what a typed or computed Tsat carries), the text that shows how to ask for the saturated liquid or
+ * vapour instead (`field` appended, e.g. ".V"); "" otherwise. IF97 gives only the stable phase, and
+ * at Tsat itself rounding decides which side of the line a state falls on.
+ */
+export function if97SaturationHint(T: number, P: number, phase: string | undefined, field: string, ctx: BuiltinContext): string {
+  if ((phase !== "liquid" && phase !== "vapor") || !(P > 0 && P < WATER_P_CRIT_MPA * 1e6)) return "";
+  let Ts: number;
+  try {
+    Ts = if97Tsat(P);
+  } catch {
+    return "";
+  }
+  if (!(Math.abs(T / Ts - 1) < 1e-5)) return "";
+  const p = ctx.units.formatQuantity(ctx.units.fromSI(P, "pressure"));
+  const which = phase === "liquid" ? "liquid" : "vapour";
+  return `. T is the saturation temperature at this pressure (Tsat = ${Number(Ts.toPrecision(7))} K): for saturated ${which} use state(if97(), {P: ${p}, x: ${phase === "liquid" ? 0 : 1}})${field}`;
 }

@@ -7,8 +7,8 @@ import {
 } from "../../thermo/index.js";
 import { modelDataOf, type ModelData } from "../values/thermo.js";
 import { ArgumentError } from "./bind.js";
-import { defineBuiltin, type BuiltinDef } from "./define.js";
-import { guard, requireAbove0 } from "./thermoArgs.js";
+import { defineBuiltin, type BuiltinContext, type BuiltinDef } from "./define.js";
+import { guard, if97SaturationHint, requireAbove0 } from "./thermoArgs.js";
 
 const PHASE_PARAM = { name: "phase", type: "string", optional: true, choices: ["stable", "liquid", "vapor", "vapour"], doc: '"stable" (default), "liquid" or "vapor" root' } as const;
 const rename = { p: "P" };
@@ -20,7 +20,7 @@ function eosOf(m: unknown, fn: string, what: string): ModelData {
 }
 
 /** Root V (m^3/mol) and Z at T, P by the model (or IF97). */
-function rootAt(m: unknown, T: number, P: number, phase: string | undefined, fn: string): { V: number; Z: number } {
+function rootAt(m: unknown, T: number, P: number, phase: string | undefined, fn: string, ctx: BuiltinContext): { V: number; Z: number } {
   requireAbove0(fn, "T", T, "K");
   requireAbove0(fn, "P", P, "Pa");
   const d = modelDataOf(m)!;
@@ -28,7 +28,8 @@ function rootAt(m: unknown, T: number, P: number, phase: string | undefined, fn:
   if (d.id === "if97") {
     const st = guard(fn, () => if97State({ T, p: P }), rename);
     if (ph !== "stable" && st.phase !== ph) {
-      throw new ArgumentError(`argument phase of ${fn}(): water at T = ${T} K, P = ${P} Pa is ${st.phase} (IF97 region ${st.region}); IF97 gives only the stable phase`);
+      const hint = if97SaturationHint(T, P, ph, fn === "volume" ? ".V" : ".Z", ctx);
+      throw new ArgumentError(`argument phase of ${fn}(): water at T = ${Number(T.toPrecision(6))} K, P = ${Number(P.toPrecision(6))} Pa is ${st.phase} (IF97 region ${st.region}); IF97 gives only the stable phase${hint}`);
     }
     const V = st.v * M_WATER;
     return { V, Z: (P * V) / (R * T) };
@@ -76,7 +77,7 @@ export const thermoProps: BuiltinDef[] = [
     method: "All real roots of the equation of state; the middle (unstable) root of three is never returned.",
     examples: ['volume(pr("n-butane"), 350 K, 9.4573 bar, "liquid")', 'volume(if97(), 300 K, 1 bar)'],
     vectorize: true,
-    impl: ({ m, T, P, phase }) => rootAt(m, T, P, phase, "volume").V,
+    impl: ({ m, T, P, phase }, ctx) => rootAt(m, T, P, phase, "volume", ctx).V,
   }),
   defineBuiltin({
     name: "zfactor",
@@ -92,7 +93,7 @@ export const thermoProps: BuiltinDef[] = [
     method: "Z of the chosen volume root.",
     examples: ['zfactor(pr("methane"), 250 K, 60 bar)', 'zfactor(lk("propane"), span(350 K, 450 K, 3), 20 bar)'],
     vectorize: true,
-    impl: ({ m, T, P, phase }) => rootAt(m, T, P, phase, "zfactor").Z,
+    impl: ({ m, T, P, phase }, ctx) => rootAt(m, T, P, phase, "zfactor", ctx).Z,
   }),
   defineBuiltin({
     name: "internal_pressure",

@@ -3,12 +3,12 @@
  * state() takes T and P (scalars, or arrays/spans for a whole curve at the cost of plain-number
  * loops) or a record of any two properties; if97() models route to IAPWS-IF97.
  */
-import { departure as thermoDeparture, if97Tsat, maxwellResidual, stateFrom, WATER_P_CRIT_MPA, type Spec } from "../../thermo/index.js";
+import { departure as thermoDeparture, maxwellResidual, stateFrom, type Spec } from "../../thermo/index.js";
 import { UnitsError } from "../../units/index.js";
 import { modelDataOf, type ModelData } from "../values/thermo.js";
 import { ArgumentError } from "./bind.js";
 import { defineBuiltin, type BuiltinContext, type BuiltinDef } from "./define.js";
-import { guard, lengthOf, pick, requireAllAbove0, siArg } from "./thermoArgs.js";
+import { guard, if97SaturationHint, lengthOf, pick, requireAllAbove0, siArg } from "./thermoArgs.js";
 import { columnCollector, eosRowAt, fastEosColumns, recordOf, rowOf } from "./thermoRows.js";
 import { waterAt, waterDeparture, waterFromSpec, type Row } from "./water.js";
 
@@ -49,26 +49,14 @@ function specArg(value: unknown, k: string, ctx: BuiltinContext): number | Float
   }
 }
 
-/**
- * IF97 water at (T, P) on a requested phase. IF97 gives only the stable phase; when T is the
- * saturation temperature at P (to 1e-5 relative, what a typed or computed Tsat carries), the error
- * shows how to ask for the saturated liquid or vapour instead: {P: .., x: 0} or {P: .., x: 1}.
- */
+/** IF97 water at (T, P) on a requested phase; at saturation the error shows the {P: .., x: 0 or 1} form. */
 function waterPhaseAt(T: number, P: number, phase: string | undefined, fn: string, ctx: BuiltinContext) {
   try {
     return waterAt(T, P, fn, phase);
   } catch (e) {
-    if (!(e instanceof ArgumentError) || (phase !== "liquid" && phase !== "vapor") || !(P < WATER_P_CRIT_MPA * 1e6)) throw e;
-    let Ts: number;
-    try {
-      Ts = if97Tsat(P);
-    } catch {
-      throw e;
-    }
-    if (!(Math.abs(T / Ts - 1) < 1e-5)) throw e;
-    const p = ctx.units.formatQuantity(ctx.units.fromSI(P, "pressure"));
-    const x = phase === "liquid" ? 0 : 1;
-    throw new ArgumentError(`${e.message}. T is the saturation temperature at this pressure (Tsat = ${Number(Ts.toPrecision(7))} K): for saturated ${phase === "liquid" ? "liquid" : "vapour"} use state(if97(), {P: ${p}, x: ${x}})`);
+    const hint = e instanceof ArgumentError ? if97SaturationHint(T, P, phase, "", ctx) : "";
+    if (!hint) throw e;
+    throw new ArgumentError(`${(e as Error).message}${hint}`);
   }
 }
 

@@ -1,7 +1,8 @@
 import { describe, expect, it } from "vitest";
 import { ArgumentError } from "../../../../lib/language/builtins/bind.js";
-import { guard, lengthOf, pick, requireAbove0, requireAllAbove0 } from "../../../../lib/language/builtins/thermoArgs.js";
-import { ThermoError } from "../../../../lib/thermo/index.js";
+import { guard, if97SaturationHint, lengthOf, pick, requireAbove0, requireAllAbove0 } from "../../../../lib/language/builtins/thermoArgs.js";
+import { createSessionWithInternals } from "../../../../lib/language/createSession.js";
+import { ThermoError, if97Tsat } from "../../../../lib/thermo/index.js";
 
 describe("guard", () => {
   it("guard turns a ThermoError into an ArgumentError naming the argument and function (renamed if asked)", () => {
@@ -32,5 +33,20 @@ describe("requireAbove0", () => {
     expect(() => requireAbove0("state", "T", -1, "K")).toThrow(/argument T of state\(\) must be above 0 K \(absolute temperature\), got -1 K/);
     expect(() => requireAllAbove0("state", "P", Float64Array.of(1, 0), "Pa")).toThrow(/argument P\[2\] of state\(\)/);
     expect(() => requireAbove0("state", "T", 1, "K")).not.toThrow();
+  });
+});
+
+describe("if97SaturationHint", () => {
+  const { internals } = createSessionWithInternals({ shouldStop: () => false });
+  const ctx = { units: internals.units } as unknown as Parameters<typeof if97SaturationHint>[4];
+  it("if97SaturationHint names the {P, x} form within 1e-5 relative of Tsat(P) below the critical pressure, nothing otherwise", () => {
+    // IAPWS-IF97 saturation: Tsat(0.1 MPa) = 372.755919 K (IF97 Table 36 check value for p = 0.1 MPa, from memory).
+    const Ts = if97Tsat(1e5);
+    expect(Math.abs(Ts - 372.755919)).toBeLessThan(1e-5);
+    expect(if97SaturationHint(Ts, 1e5, "liquid", "", ctx)).toMatch(/Tsat = 372\.7559 K\): for saturated liquid use state\(if97\(\), \{P: 100 kPa, x: 0\}\)$/);
+    expect(if97SaturationHint(Ts * (1 + 5e-6), 1e5, "vapor", ".V", ctx)).toMatch(/saturated vapour use state\(if97\(\), \{P: 100 kPa, x: 1\}\)\.V$/);
+    expect(if97SaturationHint(Ts * (1 + 2e-5), 1e5, "vapor", "", ctx)).toBe("");
+    expect(if97SaturationHint(Ts, 1e5, "stable", "", ctx)).toBe("");
+    expect(if97SaturationHint(700, 25e6, "liquid", "", ctx)).toBe(""); // above the critical pressure 22.064 MPa
   });
 });

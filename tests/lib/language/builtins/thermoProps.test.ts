@@ -18,6 +18,22 @@ const errorOf = (code: string): string => {
 };
 const rel = (a: number, b: number) => Math.abs(a / b - 1);
 
+describe("volume and zfactor of if97() at saturation", () => {
+  it("volume/zfactor(if97(), Tsat, P, phase) asked for the phase IF97 does not give there suggest state(if97(), {P, x}).V or .Z", () => {
+    session.run("Tw = tsat(if97(), 10 bar);", sink);
+    const stable = value("state(if97(), Tw, 10 bar).phase");
+    const other = stable === "liquid" ? "vapor" : "liquid";
+    const x = other === "liquid" ? 0 : 1;
+    expect(errorOf(`volume(if97(), Tw, 10 bar, "${other}")`)).toMatch(new RegExp(`argument phase of volume\\(\\).*use state\\(if97\\(\\), \\{P: 1 MPa, x: ${x}\\}\\)\\.V`));
+    expect(errorOf(`zfactor(if97(), Tw, 10 bar, "${other}")`)).toMatch(/x: [01]\}\)\.Z/);
+    // The suggested call gives the saturated volume: v'' = 0.19436 m^3/kg at 1 MPa (IAPWS-IF97 steam tables, from memory; 0.1 %).
+    expect(rel(num(`state(if97(), {P: 10 bar, x: ${x}}).v`, "m^3/kg"), x === 1 ? 0.19436 : 0.0011272)).toBeLessThan(1e-3);
+    // Far from saturation: the plain message, with T and P rounded.
+    const far = errorOf('volume(if97(), 400 K, 10 bar, "vapor")');
+    expect(far).toMatch(/water at T = 400 K, P = 1000000 Pa is liquid \(IF97 region 1\); IF97 gives only the stable phase \(line/);
+  });
+});
+
 describe("volume", () => {
   // Smith, Van Ness & Abbott, 7th ed., Example 3.9 (from memory): n-butane at 350 K, 9.4573 bar (cm^3/mol).
   const BOOK = [["vdw", 2667.1, 191.0], ["rk", 2555.3, 133.3], ["srk", 2520.3, 127.8], ["pr", 2486.1, 112.6]] as const;
