@@ -51,7 +51,14 @@ class LazyEngine implements Interpreter {
   }
   /** Starts the engine if it has not been started; resolves when it is usable. */
   start(): Promise<Interpreter> {
-    this.starting ??= this.create().then((e) => (this.engine = e));
+    // A failed start is forgotten, so the next request tries again instead of failing for good.
+    this.starting ??= this.create().then(
+      (e) => (this.engine = e),
+      (error: unknown) => {
+        this.starting = undefined;
+        throw error;
+      },
+    );
     return this.starting;
   }
   private with<T>(call: (e: Interpreter) => Promise<T>): Promise<T> {
