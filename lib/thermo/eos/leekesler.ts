@@ -104,6 +104,36 @@ function branches(pc: PseudoCritical, Tr: number, Pr: number): Map<Branch, Branc
   return out;
 }
 
+/**
+ * branches() with a memo of the last few (pseudo-critical constants, T, P): one state asks for the same
+ * branches from volumes() and from residual() of each root, and a mixture's component ln phi asks for
+ * the same shifted compositions on both roots. Results are pure functions of the key, so a hit returns
+ * exactly what a fresh call would. One memo per model (no shared state); callers must not mutate the Map.
+ */
+function branchMemo(size = 8): (pc: PseudoCritical, T: number, P: number) => Map<Branch, BranchState> {
+  const keys = new Float64Array(5 * size).fill(NaN);
+  const values: (Map<Branch, BranchState> | undefined)[] = new Array(size);
+  let next = 0;
+  return (pc, T, P) => {
+    for (let i = 0; i < size; i++) {
+      const o = 5 * i;
+      if (keys[o] === T && keys[o + 1] === P && keys[o + 2] === pc.Tc && keys[o + 3] === pc.Pc && keys[o + 4] === pc.omega) {
+        return values[i]!;
+      }
+    }
+    const out = branches(pc, T / pc.Tc, P / pc.Pc);
+    const o = 5 * next;
+    keys[o] = T;
+    keys[o + 1] = P;
+    keys[o + 2] = pc.Tc;
+    keys[o + 3] = pc.Pc;
+    keys[o + 4] = pc.omega;
+    values[next] = out;
+    next = (next + 1) % size;
+    return out;
+  };
+}
+
 /** Lee-Kesler model of a pure fluid or mixture; `mixing` picks the pseudo-critical rule. */
 export function leeKesler(fluid: Fluid, mixing: LeeKeslerMixing = "ploecker"): LeeKeslerModel {
   if (fluid.components.length === 0) throw new ThermoError("fluid", "Lee-Kesler needs at least one component");
@@ -115,9 +145,10 @@ export function leeKesler(fluid: Fluid, mixing: LeeKeslerMixing = "ploecker"): L
   }
   const pc = lkPseudoCritical(fluid, fluid.x, mixing);
   const n = fluid.components.length;
+  const memo = branchMemo();
 
   const branchOf = (T: number, P: number, V: number): Branch => {
-    const all = branches(pc, T / pc.Tc, P / pc.Pc);
+    const all = memo(pc, T, P);
     let best: Branch = "vapor";
     let err = Infinity;
     for (const [k, s] of all) {
@@ -132,7 +163,7 @@ export function leeKesler(fluid: Fluid, mixing: LeeKeslerMixing = "ploecker"): L
 
   const lnphiAt = (x: readonly number[], T: number, P: number, branch: Branch): number => {
     const p = lkPseudoCritical(fluid, x, mixing);
-    const all = branches(p, T / p.Tc, P / p.Pc);
+    const all = memo(p, T, P);
     const s = all.get(branch) ?? all.get("vapor")!;
     return s.lnphi;
   };
@@ -148,7 +179,7 @@ export function leeKesler(fluid: Fluid, mixing: LeeKeslerMixing = "ploecker"): L
     volumes(T: number, P: number): number[] {
       requirePositive("T", T, "K");
       requirePositive("P", P, "Pa");
-      const vs = [...branches(pc, T / pc.Tc, P / pc.Pc).values()].map((s) => (s.Z * R * T) / P);
+      const vs = [...memo(pc, T, P).values()].map((s) => (s.Z * R * T) / P);
       vs.sort((a, b) => a - b);
       return vs.filter((v, i) => i === 0 || Math.abs(v - vs[i - 1]!) > 1e-12 * v);
     },
@@ -158,7 +189,7 @@ export function leeKesler(fluid: Fluid, mixing: LeeKeslerMixing = "ploecker"): L
       requirePositive("P", P, "Pa");
       requirePositive("V", V, "m^3/mol");
       const branch = branchOf(T, P, V);
-      const s = branches(pc, T / pc.Tc, P / pc.Pc).get(branch)!;
+      const s = memo(pc, T, P).get(branch)!;
       const HR = s.HRdRTc * R * pc.Tc;
       const SR = s.SRdR * R;
       const GR = HR - T * SR;

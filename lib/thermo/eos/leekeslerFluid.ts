@@ -69,6 +69,10 @@ export function lkRoots(k: LeeKeslerConstants, Tr: number, Pr: number): number[]
   // Below 0.25/|B| the isotherm is virial-like, Tr rho (1 + 2 B rho) > 0: no extremum there.
   const g0 = Math.max(lo, Math.min(0.25, 0.25 / Math.abs(c.B)));
   const ext: number[] = [];
+  const dP = (r: number) => dPdRho(c, r);
+  // Grid densities and their Pr - Pr(rho), kept to narrow each root's bracket to one grid cell.
+  const gr: number[] = [g0];
+  const gf: number[] = [pressureRho(c, g0) - Pr];
   let r0 = g0;
   let d0 = dPdRho(c, r0);
   if (!(d0 > 0)) return lkRootsScan(k, Tr, Pr);
@@ -76,18 +80,21 @@ export function lkRoots(k: LeeKeslerConstants, Tr: number, Pr: number): number[]
   let dPrev = NaN;
   const n = Math.ceil(Math.log(hi / g0) / Math.log(1.2));
   for (let i = 1; i <= n; i++) {
-    const r1 = i === n ? hi : g0 * 1.2 ** i;
+    const r1 = i === n ? hi : r0 * 1.2;
     const d1 = dPdRho(c, r1);
-    if (d0 * d1 < 0) ext.push(illinois((r) => dPdRho(c, r), r0, r1, d0, d1));
+    gr.push(r1);
+    gf.push(pressureRho(c, r1) - Pr);
+    // Extrema only need ~1e-10: an error delta moves Pr at the extremum by O(delta^2).
+    if (d0 * d1 < 0) ext.push(illinois(dP, r0, r1, d0, d1, 1e-10));
     else if (i >= 2 && ((dPrev > d0 && d0 < d1 && d0 > 0) || (dPrev < d0 && d0 > d1 && d0 < 0))) {
       // A dip of dPr/drho between grid points: find its extremum and see whether it crosses zero.
       const s0 = d2PdRho2(c, rPrev);
       const s1 = d2PdRho2(c, r1);
-      const rm = s0 * s1 < 0 ? illinois((r) => d2PdRho2(c, r), rPrev, r1, s0, s1) : r0;
+      const rm = s0 * s1 < 0 ? illinois((r) => d2PdRho2(c, r), rPrev, r1, s0, s1, 1e-10) : r0;
       const dm = dPdRho(c, rm);
       if (dm * d0 < 0) {
-        ext.push(illinois((r) => dPdRho(c, r), rPrev, rm, dPrev, dm));
-        ext.push(illinois((r) => dPdRho(c, r), rm, r1, dm, d1));
+        ext.push(illinois(dP, rPrev, rm, dPrev, dm, 1e-10));
+        ext.push(illinois(dP, rm, r1, dm, d1, 1e-10));
       }
     }
     rPrev = r0;
@@ -95,15 +102,34 @@ export function lkRoots(k: LeeKeslerConstants, Tr: number, Pr: number): number[]
     r0 = r1;
     d0 = d1;
   }
-  ext.sort((a, b) => a - b);
-  const pts = [lo, ...ext.filter((e) => e > lo && e < hi), hi];
+  ext.sort((x, y) => x - y);
+  ext.push(hi);
   const roots: number[] = [];
+  let a = lo;
   let fa = pressureRho(c, lo) - Pr;
-  for (let i = 1; i < pts.length; i++) {
-    const fb = pressureRho(c, pts[i]!) - Pr;
-    if (fa < 0 && fb > 0) {
-      const start = i === 1 ? Pr / Tr : NaN; // ideal-gas density on the vapour-like piece
-      const rho = newtonInBracket(c, Pr, pts[i - 1]!, pts[i]!, fa, fb, start);
+  let g = 0; // next grid index above a
+  for (const e of ext) {
+    if (!(e > a)) continue;
+    const fe = e === hi ? gf[gf.length - 1]! : pressureRho(c, e) - Pr;
+    if (fa < 0 && fe > 0) {
+      // Rising piece: the root lies in the grid cell where Pr - Pr(rho) changes sign.
+      let ca = a;
+      let cfa = fa;
+      let cb = e;
+      let cfb = fe;
+      while (g < gr.length && gr[g]! <= a) g++;
+      for (; g < gr.length && gr[g]! < e; g++) {
+        if (gf[g]! < 0) {
+          ca = gr[g]!;
+          cfa = gf[g]!;
+        } else {
+          cb = gr[g]!;
+          cfb = gf[g]!;
+          break;
+        }
+      }
+      const start = ca === lo ? Pr / Tr : NaN; // ideal-gas density on the vapour-like piece
+      const rho = newtonInBracket(c, Pr, ca, cb, cfa, cfb, start);
       if (!(rho > 0)) return lkRootsScan(k, Tr, Pr);
       // One Newton step on the Vr form (dPr/dVr = -rho^2 dPr/drho) so the root solves lkPr itself, which
       // rounds differently from the rho form by up to ~1e-12 on steep liquid branches.
@@ -111,9 +137,10 @@ export function lkRoots(k: LeeKeslerConstants, Tr: number, Pr: number): number[]
       const polished = Vr + (lkPr(k, Tr, Vr) - Pr) / (rho * rho * dPdRho(c, rho));
       roots.push(Math.abs(polished / Vr - 1) < 1e-10 ? polished : Vr);
     }
-    fa = fb;
+    a = e;
+    fa = fe;
   }
-  return roots.sort((a, b) => a - b);
+  return roots.sort((x, y) => x - y);
 }
 
 /** Pr(rho) at one Tr: Tr rho (1 + B rho + C rho^2 + D rho^5) + E (beta rho^3 + gamma rho^5) exp(-gamma rho^2). */
@@ -217,7 +244,7 @@ export function lkRootsScan(k: LeeKeslerConstants, Tr: number, Pr: number): numb
   });
 }
 
-function illinois(f: (x: number) => number, a: number, b: number, fa: number, fb: number): number {
+function illinois(f: (x: number) => number, a: number, b: number, fa: number, fb: number, tol = 1e-13): number {
   for (let it = 0; it < 200; it++) {
     const c = (a * fb - b * fa) / (fb - fa);
     const fc = f(c);
@@ -230,7 +257,7 @@ function illinois(f: (x: number) => number, a: number, b: number, fa: number, fb
     }
     b = c;
     fb = fc;
-    if (Math.abs(b - a) <= 1e-13 * Math.abs(b)) return b;
+    if (Math.abs(b - a) <= tol * Math.abs(b)) return b;
   }
   return b;
 }

@@ -62,6 +62,24 @@ describe("leeKesler", () => {
     expect(same.residual(320, 30e5, Vs).HR).toBeCloseTo(one.residual(320, 30e5, one.volumes(320, 30e5)[0]!).HR, 6);
   });
 
+  it("leeKesler residual does not depend on call order: a used model equals a fresh one (branch memo)", () => {
+    // The model keeps a memo of recent (T, P) branches; results must be what a fresh model computes.
+    const fluid: Fluid = { components: [getSubstance("methane"), getSubstance("n-butane")], x: [0.6, 0.4] };
+    const used = leeKesler(fluid);
+    const states = [[300, 20e5], [380, 30e5], [250, 5e5], [420, 80e5], [300, 20.000001e5]] as const;
+    for (let pass = 0; pass < 3; pass++) {
+      for (const [T, P] of states) {
+        const fresh = leeKesler(fluid);
+        const Vu = used.volumes(T, P);
+        expect(Vu).toEqual(fresh.volumes(T, P));
+        for (const V of Vu) expect(used.residual(T, P, V)).toEqual(leeKesler(fluid).residual(T, P, V));
+      }
+    }
+    // Same T, P, other composition or mixing rule: a different pseudo-critical point, different answer.
+    const other = leeKesler({ ...fluid, x: [0.5, 0.5] });
+    expect(other.volumes(300, 20e5)[0]).not.toBe(used.volumes(300, 20e5)[0]);
+  });
+
   it("leeKesler validity warns outside 0.3 <= Tr <= 4, Pr <= 10 and near the critical point", () => {
     const m = leeKesler(pure("nitrogen"));
     expect(m.validity(300, 1e6)).toEqual([]);
