@@ -139,12 +139,21 @@ export function columnCollector(n: number) {
   // Notes that differ only in their numbers (Tr = 0.71, 0.72 ...) are one caution: shown once, first instance.
   const groups = new Map<string, { text: string; count: number }>();
   const keyOf = new Map<string, string>();
+  let last: { text: string; count: number } | undefined;
+  let lastText = "";
   const note = (text: string): void => {
+    // The same caution on consecutive points (the common case of a span) skips the lookups.
+    if (last !== undefined && text === lastText) {
+      last.count++;
+      return;
+    }
     let key = keyOf.get(text);
     if (key === undefined) keyOf.set(text, (key = text.replace(/[-+]?\d[\d.]*(e[-+]?\d+)?/g, "#")));
-    const g = groups.get(key);
+    let g = groups.get(key);
     if (g) g.count++;
-    else groups.set(key, { text, count: 1 });
+    else groups.set(key, (g = { text, count: 1 }));
+    last = g;
+    lastText = text;
   };
   return {
     add(i: number, row: Row): void {
@@ -200,35 +209,53 @@ export function fastEosColumns(d: ModelData, T: Float64Array | number, P: Float6
   }
   const M = d.M;
   const col = columnCollector(n);
-  const map = (src: Float64Array, f: (v: number, i: number) => number) => {
-    const o = new Float64Array(n);
-    for (let i = 0; i < n; i++) o[i] = f(src[i]!, i);
-    return o;
-  };
-  const Tcol = typeof T === "number" ? new Float64Array(n).fill(T) : T.slice();
-  const Pcol = typeof P === "number" ? new Float64Array(n).fill(P) : P.slice();
-  const phi = map(c.lnphi, Math.exp);
+  const f64 = () => new Float64Array(n);
+  const Tcol = typeof T === "number" ? f64().fill(T) : T.slice();
+  const Pcol = typeof P === "number" ? f64().fill(P) : P.slice();
+  const [v, rho, phi, f] = [f64(), f64(), f64(), f64()];
+  // rowOf's arithmetic, one plain loop (a callback per column would be a megamorphic call per element).
+  for (let i = 0; i < n; i++) {
+    const V = c.V[i]!;
+    v[i] = V / M;
+    rho[i] = M / V;
+    phi[i] = Math.exp(c.lnphi[i]!);
+    f[i] = phi[i]! * Pcol[i]!;
+  }
   const set: Record<string, Float64Array> = {
-    T: Tcol, P: Pcol, V: c.V, v: map(c.V, (V) => V / M), rho: map(c.V, (V) => M / V), Z: c.Z,
-    HR: c.HR, SR: c.SR, UR: c.UR, GR: c.GR, AR: c.AR, phi, lnphi: c.lnphi, f: map(phi, (x, i) => x * Pcol[i]!),
+    T: Tcol, P: Pcol, V: c.V, v, rho, Z: c.Z, HR: c.HR, SR: c.SR, UR: c.UR, GR: c.GR, AR: c.AR, phi, lnphi: c.lnphi, f,
   };
   if (c.totals) {
     const t = c.totals;
     Object.assign(set, { H: t.H, S: t.S, U: t.U, G: t.G, A: t.A, Cp: t.Cp, Cv: t.Cv, w: t.w });
-    for (const k of ["H", "S", "U", "G", "A", "Cp", "Cv"] as const) set[k.toLowerCase()] = map(t[k], (x) => x / M);
+    for (const k of ["H", "S", "U", "G", "A", "Cp", "Cv"] as const) {
+      const src = t[k];
+      const dst = f64();
+      for (let i = 0; i < n; i++) dst[i] = src[i]! / M;
+      set[k.toLowerCase()] = dst;
+    }
   }
-  for (const [k, v] of Object.entries(set)) col.column(k, v);
+  for (const k in set) col.column(k, set[k]!);
+  const labels = PHASE_LABELS;
+  const warnings = d.idealGas ? d.idealGas.warnings : undefined;
   for (let i = 0; i < n; i++) {
-    col.phaseAt(i, PHASE_LABELS[c.phase[i]!]!);
+    col.phaseAt(i, labels[c.phase[i]!]!);
     // Notes in notesOf's order.
-    const f = c.flags[i]!;
-    if (f & STATE_FLAG_BITS.nearCritical) col.note(NOTE.nearCritical);
-    if (f & STATE_FLAG_BITS.supercritical) col.note(NOTE.supercritical);
-    if (f & STATE_FLAG_BITS.metastable) col.note(NOTE.metastable);
-    if (f & STATE_FLAG_BITS.twoPhase) col.note(NOTE.saturation);
+    const fl = c.flags[i]!;
+    if (fl !== 0) {
+      if (fl & STATE_FLAG_BITS.nearCritical) col.note(NOTE.nearCritical);
+      if (fl & STATE_FLAG_BITS.supercritical) col.note(NOTE.supercritical);
+      if (fl & STATE_FLAG_BITS.metastable) col.note(NOTE.metastable);
+      if (fl & STATE_FLAG_BITS.twoPhase) col.note(NOTE.saturation);
+    }
     if (d.noTotals) col.note(d.noTotals);
-    if (d.idealGas) for (const w of d.idealGas.warnings(Tcol[i]!)) col.note(w);
-    if (d.validity) for (const w of d.validity(Tcol[i]!, Pcol[i]!)) col.note(w);
+    if (warnings) {
+      const ws = warnings(Tcol[i]!);
+      for (let j = 0; j < ws.length; j++) col.note(ws[j]!);
+    }
+    if (d.validity) {
+      const ws = d.validity(Tcol[i]!, Pcol[i]!);
+      for (let j = 0; j < ws.length; j++) col.note(ws[j]!);
+    }
   }
   return col.finish(d, ctx);
 }
