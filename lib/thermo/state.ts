@@ -8,6 +8,8 @@
  * twoPhase(model, saturation, x): the lever-rule state between saturated liquid and vapour.
  * Two-property specifications (stateFrom) live in spec/stateFrom.ts.
  * change(s1, s2): differences of every property present in both states.
+ * Many (T, P) states of a pure fluid by a cubic model at once, into typed columns with the same
+ * answers: stateColumns.ts (the fast path of vectorised state() calls).
  */
 import { ThermoError } from "./errors.js";
 import { checkPhase, pseudoCritical, selectRoot, type PhaseLabel, type PhaseRequest, type StateFlags } from "./eos/phase.js";
