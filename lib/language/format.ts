@@ -36,8 +36,10 @@ export function createFormatter(math: MathJsInstance, units: UnitsBridge): Forma
   };
 
   /** Arrays of quantities sharing one unit print once: [1, 2, 3] K (3 values). */
-  const textArray = (items: unknown[]): string => {
-    const count = items.length > MAX_ITEMS ? ` (${items.length} values)` : "";
+  const textArray = (raw: unknown[]): string => {
+    const count = raw.length > MAX_ITEMS ? ` (${raw.length} values)` : "";
+    // Results of arithmetic in a messy compound unit show in their dimension's unit, as scalars do.
+    const items = raw.map((u) => (math.isUnit(u) ? units.displayForm(u) : u));
     if (items.length > 0 && items.every((u) => math.isUnit(u))) {
       const unitsOf = (items as Unit[]).map((u) => u.formatUnits());
       if (unitsOf.every((s) => s === unitsOf[0])) {

@@ -84,6 +84,23 @@ function pinSymbols(n: Node, Unit: UnitClassLike, literal: string | undefined, o
   n.forEach((child: MathNode) => pinSymbols(child as Node, Unit, literal, onShadowed, pinned));
 }
 
+/**
+ * A literal's value carries the units as written: mathjs's skipAutomaticSimplification flag (what
+ * `to` sets) tells display (lib/units simplifyForDisplay) to keep them; `10.73 psi ft^3/(lbmol degR)`
+ * is not turned into J/(mol K). Products and quotients with other quantities clear the flag again.
+ */
+function markAsWritten(n: Node): void {
+  const original = n._compile.bind(n);
+  n._compile = (math, argNames) => {
+    const evaluate = original(math, argNames);
+    return (scope, args, context) => {
+      const v = evaluate(scope, args, context) as { isUnit?: boolean; skipAutomaticSimplification?: boolean };
+      if (typeof v === "object" && v !== null && v.isUnit === true) v.skipAutomaticSimplification = true;
+      return v;
+    };
+  };
+}
+
 function isParam(args: unknown, name: string): boolean {
   return typeof args === "object" && args !== null && Object.prototype.hasOwnProperty.call(args, name);
 }
@@ -96,7 +113,7 @@ export function pinUnitLiterals(root: MathNode, Unit: UnitClassLike, onShadowed:
   const pinned = new Set<Node>();
   const visit = (node: Node): void => {
     if (isLiteral(node, Unit)) {
-      const text = node.toString();
+      const text = node.toString().replace(/ \^ /g, "^");
       // Only the unit parts: the number (and anything else) keeps its ordinary meaning.
       const unitParts = (n: Node): void => {
         if (!isLiteral(n, Unit)) return; // the leading number
@@ -105,6 +122,7 @@ export function pinUnitLiterals(root: MathNode, Unit: UnitClassLike, onShadowed:
         pinSymbols(right!, Unit, text, onShadowed, pinned);
       };
       unitParts(node);
+      markAsWritten(node);
     } else if (op(node, "to") && isUnitExpr((node.args as Node[])[1]!, Unit)) {
       // The target of a conversion is a unit by its position: no warning needed.
       pinSymbols((node.args as Node[])[1]!, Unit, undefined, onShadowed, pinned);

@@ -5,8 +5,8 @@
  */
 import type { MathJsInstance, Unit } from "mathjs";
 import {
-  DIMENSIONS, chooseUnit, chooseUnitName, dimensionOf, formatQuantity, fromSI, hasDimension, isDimensionName, scalarSI,
-  type DimensionName,
+  DIMENSIONS, chooseUnit, chooseUnitName, dimensionOf, formatQuantity, fromSI, hasDimension, isDimensionName, isUnitValue, scalarSI,
+  simplifyForDisplay, type DimensionName,
 } from "../units/index.js";
 
 export interface UnitsBridge {
@@ -25,8 +25,13 @@ export interface UnitsBridge {
   displayUnitFor(values: Float64Array, dimOrUnit: string): string;
   /** Name of a quantity's dimension ("pressure"), or undefined when it has no name. */
   dimensionOf(value: Unit): string | undefined;
-  /** The quantity as the user should read it (significant figures, the unit it carries). */
+  /**
+   * The quantity as the user should read it (significant figures, the unit it carries; a result of
+   * arithmetic in a messy compound unit in its dimension's unit, lib/units displayForm.ts).
+   */
   formatQuantity(value: Unit | number): string;
+  /** The value in the unit it is shown in (lib/units simplifyForDisplay). */
+  displayForm(value: Unit): Unit | number;
 }
 
 /** "a pressure", "an amount": article for messages. */
@@ -80,6 +85,7 @@ export function createUnitsBridge(math: MathJsInstance): UnitsBridge {
       return big === 0 ? si : chooseUnit(math.unit(big, si)).formatUnits();
     },
     dimensionOf: (value) => dimensionOf(value),
-    formatQuantity: (value) => formatQuantity(value, { sig: 6 }),
+    formatQuantity: (value) => formatQuantity(isUnitValue(value) ? simplifyForDisplay(value) : value, { sig: 6 }),
+    displayForm: (value) => simplifyForDisplay(value),
   };
 }

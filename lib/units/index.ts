@@ -11,6 +11,7 @@ export { toSI, scalarSI, fromSI, fromSIArray, describeValue } from "./convert.js
 export { per_mass, per_mole } from "./basis.js";
 export { formatQuantity, chooseUnit, chooseUnitName, DISPLAY_CANDIDATES, CANDIDATE_SI_FACTORS, type FormatOptions } from "./format.js";
 export { cancelUnits } from "./simplify.js";
+export { simplifyForDisplay } from "./displayForm.js";
 export { isOffsetQuantity, isUnitValue, absoluteOf } from "./offset.js";
 export { installParseCache, PARSE_CACHE_LIMIT } from "./parseCache.js";
 export { UnitsError, type UnitsErrorCode } from "./errors.js";

@@ -21,7 +21,8 @@ export function cancelUnits(u: Unit): Unit | number {
   }
   const kept = [...groups.values()].filter((g) => Math.abs(g.power) > 1e-12);
   if (kept.length === u.units.length) return u;
-  if (kept.length === 0) return Number(u.toNumber(""));
+  // All powers cancel: the stored value is the pure number (toNumber("") would divide by kJ/J = 1000).
+  if (kept.length === 0) return Number(u.value);
   const text = kept.map((g) => (g.power === 1 ? g.name : `${g.name}^${g.power}`)).join(" ");
   return u.to(text);
 }

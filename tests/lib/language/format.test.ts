@@ -21,6 +21,14 @@ describe("createFormatter", () => {
     const long = f.text(Array.from({ length: 20 }, (_, i) => i));
     expect(long).toBe("[0, 1, 2, 3, 4, 5, ..., 17, 18, 19] (20 values)");
   });
+  it("text shows results of arithmetic in messy compound units in their dimension's unit (scalars and arrays)", () => {
+    // 100e5 Pa x 1 m^3 / (8.314462618 J/(mol K) x 3000 mol) = 400.908 K (python3, CODATA R).
+    expect(f.text(math.evaluate("(100 bar) * (1 m^3) / ((8.314462618 J/(mol K)) * (3 kmol))"))).toBe("400.908 K");
+    // 1 bar x 3 L = 300 J, 2 bar x 3 L = 600 J (bar = 1e5 Pa, L = 1e-3 m^3).
+    expect(f.text(math.evaluate("[1, 2] bar * (3 L)"))).toBe("[300, 600] J");
+    // a unit the user converted to is kept.
+    expect(f.text(math.evaluate("(2 bar) * (3 L) to bar L"))).toBe("6 bar L");
+  });
   it("text prints a column with its count", () => {
     const col = createColumnFactory(math)(Float64Array.from({ length: 100 }, (_, i) => 300 + i), "K", "K");
     expect(f.text(col)).toBe("[300, 301, 302, 303, 304, 305, ..., 397, 398, 399] K (100 values)");

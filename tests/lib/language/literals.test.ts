@@ -73,6 +73,19 @@ describe("pinUnitLiterals", () => {
 });
 
 describe("unit literals in a session", () => {
+  it("a session shows a literal in the units written, a result of arithmetic simplified", () => {
+    const s = createSession({ shouldStop: () => false });
+    const sink = { stdout() {}, display() {}, clear() {} };
+    const text = (code: string) => {
+      const r = s.run(code, sink);
+      return r.ok ? String(r.result?.["text/plain"]) : `ERROR ${r.error.evalue}`;
+    };
+    expect(text("2 J/(mol bar)")).toBe("2 J / (mol bar)"); // as written
+    expect(text("R * 300 K / (5 bar)")).toBe("4.98868 L / mol"); // 8.314462618 x 300 / 5e5 m^3/mol (CODATA R)
+    expect(text("a = 100 bar * 1 m^3 / (8.314462618 J/(mol K) * 3 kmol)")).toBe("a = 400.908 K"); // P V/(n R)
+    expect(text("a to degC")).toBe("127.758 degC"); // 400.908 K - 273.15
+  });
+
   it("a session keeps `1 m` a metre after m = pr(...) and warns once per name", () => {
     const out: string[] = [];
     const sink = { stdout: (t: string) => out.push(t), display() {}, clear() {} };

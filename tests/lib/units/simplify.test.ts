@@ -24,6 +24,10 @@ describe("cancelUnits", () => {
     expect(u.units.length).toBe(3);
     expect(u.toNumber("J/(mol K)")).toBeCloseTo(32, 9); // 2 J/(g K) x 16 g/mol
   });
+  it("cancelUnits turns units that cancel completely into the pure number (4 kJ/J = 4000)", () => {
+    expect(cancelUnits(math.unit(4, "kJ/J"))).toBe(4000); // k = 1000 (SI prefix)
+    expect(cancelUnits(math.unit(2.5, "g/kg"))).toBeCloseTo(0.0025, 15);
+  });
   it("cancelUnits leaves simple units alone", () => {
     const u = math.unit(3, "bar");
     expect(cancelUnits(u)).toBe(u);
