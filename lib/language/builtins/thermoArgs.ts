@@ -113,3 +113,13 @@ export function if97SaturationHint(T: number, P: number, phase: string | undefin
   const which = phase === "liquid" ? "liquid" : "vapour";
   return `. T is the saturation temperature at this pressure (Tsat = ${Number(Ts.toPrecision(7))} K): for saturated ${which} use state(if97(), {P: ${p}, x: ${phase === "liquid" ? 0 : 1}})${field}`;
 }
+
+/** Runs point i of a vectorised call; an ArgumentError gains which element it came from. */
+export function atElement<T>(i: number, n: number, f: () => T): T {
+  try {
+    return f();
+  } catch (e) {
+    if (e instanceof ArgumentError) throw new ArgumentError(`${e.message} (at element ${i + 1} of ${n})`);
+    throw e;
+  }
+}

@@ -9,7 +9,7 @@ import {
 import type { ModelData } from "../values/thermo.js";
 import type { BuiltinContext } from "./define.js";
 import { ArgumentError } from "./bind.js";
-import { guard } from "./thermoArgs.js";
+import { atElement, guard } from "./thermoArgs.js";
 import type { Row } from "./water.js";
 
 /** Every numeric field of a state record and its dimension, in display order. */
@@ -204,7 +204,8 @@ export function fastEosColumns(d: ModelData, T: Float64Array | number, P: Float6
   if (c.interrupted) throw ctx.interrupted();
   const at = (x: Float64Array | number, i: number) => (typeof x === "number" ? x : x[i]!);
   if (c.stoppedAt >= 0) {
-    eosRowAt(d, at(T, c.stoppedAt), at(P, c.stoppedAt), phase, fn); // throws the general path's error
+    const i = c.stoppedAt;
+    atElement(i, n, () => eosRowAt(d, at(T, i), at(P, i), phase, fn)); // throws the general path's error
     return undefined; // the general path accepts the point: let it do the whole call
   }
   const M = d.M;

@@ -8,7 +8,7 @@ import { UnitsError } from "../../units/index.js";
 import { modelDataOf, type ModelData } from "../values/thermo.js";
 import { ArgumentError } from "./bind.js";
 import { defineBuiltin, type BuiltinContext, type BuiltinDef } from "./define.js";
-import { guard, if97SaturationHint, lengthOf, pick, requireAllAbove0, siArg } from "./thermoArgs.js";
+import { atElement, guard, if97SaturationHint, lengthOf, pick, requireAllAbove0, siArg } from "./thermoArgs.js";
 import { columnCollector, eosRowAt, fastEosColumns, recordOf, rowOf } from "./thermoRows.js";
 import { waterAt, waterDeparture, waterFromSpec, type Row } from "./water.js";
 
@@ -75,7 +75,7 @@ function evaluate(d: ModelData, inputs: Record<string, number | Float64Array>, p
   const collect = columnCollector(n);
   for (let i = 0; i < n; i++) {
     if ((i & 255) === 0 && ctx.shouldStop()) throw ctx.interrupted();
-    collect.add(i, point(pick(inputs, i, args)));
+    collect.add(i, atElement(i, n, () => point(pick(inputs, i, args))));
   }
   return collect.finish(d, ctx);
 }

@@ -1,6 +1,6 @@
 import { describe, expect, it } from "vitest";
 import { ArgumentError } from "../../../../lib/language/builtins/bind.js";
-import { guard, if97SaturationHint, lengthOf, pick, requireAbove0, requireAllAbove0 } from "../../../../lib/language/builtins/thermoArgs.js";
+import { atElement, guard, if97SaturationHint, lengthOf, pick, requireAbove0, requireAllAbove0 } from "../../../../lib/language/builtins/thermoArgs.js";
 import { createSessionWithInternals } from "../../../../lib/language/createSession.js";
 import { ThermoError, if97Tsat } from "../../../../lib/thermo/index.js";
 
@@ -48,5 +48,13 @@ describe("if97SaturationHint", () => {
     expect(if97SaturationHint(Ts * (1 + 2e-5), 1e5, "vapor", "", ctx)).toBe("");
     expect(if97SaturationHint(Ts, 1e5, "stable", "", ctx)).toBe("");
     expect(if97SaturationHint(700, 25e6, "liquid", "", ctx)).toBe(""); // above the critical pressure 22.064 MPa
+  });
+});
+
+describe("atElement", () => {
+  it("atElement adds the 1-based element to an ArgumentError and lets other errors through unchanged", () => {
+    expect(() => atElement(4, 10, () => { throw new ArgumentError("argument T of state(): bad"); })).toThrow(/^argument T of state\(\): bad \(at element 5 of 10\)$/);
+    expect(() => atElement(0, 2, () => { throw new RangeError("other"); })).toThrow(RangeError);
+    expect(atElement(0, 1, () => 7)).toBe(7);
   });
 });

@@ -155,7 +155,9 @@ describe("state heat capacities and speed of sound", () => {
   });
 
   it("state over a span names the general path's error for a point with no requested root", () => {
-    expect(errorOf('state(m, span(300 K, 400 K, 3), 40 bar, "liquid")')).toMatch(/liquid root asked of a supercritical fluid at T = 400 K > Tc = 369\.8 K/);
+    expect(errorOf('state(m, span(300 K, 400 K, 3), 40 bar, "liquid")')).toMatch(/liquid root asked of a supercritical fluid at T = 400 K > Tc = 369\.8 K.*\(at element 3 of 3\)/);
+    // The general path (if97, specs) names the element too.
+    expect(errorOf('state(if97(), [300 K, 500 K], 10 bar, "liquid")')).toMatch(/is vapor \(IF97 region 2\).*\(at element 2 of 2\)/);
   });
 });
 
