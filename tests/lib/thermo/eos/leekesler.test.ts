@@ -3,6 +3,7 @@ import { R } from "../../../../lib/thermo/constants.js";
 import { getSubstance } from "../../../../lib/thermo/substances/databank.js";
 import { leeKesler, lkPseudoCritical } from "../../../../lib/thermo/eos/leekesler.js";
 import type { Fluid } from "../../../../lib/thermo/eos/types.js";
+import { LK_OMEGA_REFERENCE, LK_REFERENCE, LK_SIMPLE, lkProperties, lkRootsScan } from "../../../../lib/thermo/eos/leekeslerFluid.js";
 
 const pure = (name: string): Fluid => ({ components: [getSubstance(name)], x: [1] });
 
@@ -78,6 +79,38 @@ describe("leeKesler", () => {
     // Same T, P, other composition or mixing rule: a different pseudo-critical point, different answer.
     const other = leeKesler({ ...fluid, x: [0.5, 0.5] });
     expect(other.volumes(300, 20e5)[0]).not.toBe(used.volumes(300, 20e5)[0]);
+  });
+
+  it("leeKesler volumes and residual equal the corresponding-states combination at the original scan's roots (1e-10)", () => {
+    // Reference: X = X0 + (omega/omega_r)(X_r - X0) of lkProperties at lkRootsScan's roots, the model's
+    // definition (Lee & Kesler 1975) evaluated with the root finder it had before lkRoots.
+    const sub = getSubstance("propane");
+    const m = leeKesler(pure("propane"));
+    const w = sub.omega / LK_OMEGA_REFERENCE;
+    for (const Tr of [0.45, 0.7, 0.9, 0.99, 1.05, 1.5, 3]) {
+      for (const Pr of [0.01, 0.1, 0.5, 0.95, 2, 8]) {
+        const T = Tr * sub.Tc;
+        const P = Pr * sub.Pc;
+        const r0 = lkRootsScan(LK_SIMPLE, Tr, Pr);
+        const rr = lkRootsScan(LK_REFERENCE, Tr, Pr);
+        const pick = (branch: number) => [r0[branch < 0 ? r0.length - 1 : 0]!, rr[branch < 0 ? rr.length - 1 : 0]!];
+        const branchesRef = r0.length > 1 || rr.length > 1 ? [0, -1] : [-1];
+        const V = m.volumes(T, P);
+        expect(V.length, `Tr ${Tr} Pr ${Pr}`).toBe(branchesRef.length);
+        branchesRef.forEach((b, i) => {
+          const [v0, vr] = pick(b);
+          const a = lkProperties(LK_SIMPLE, Tr, v0!);
+          const c = lkProperties(LK_REFERENCE, Tr, vr!);
+          const Z = a.Z + w * (c.Z - a.Z);
+          const HR = (a.HRdRTc + w * (c.HRdRTc - a.HRdRTc)) * R * sub.Tc;
+          const SR = (a.SRdR + w * (c.SRdR - a.SRdR)) * R;
+          const res = m.residual(T, P, V[i]!);
+          expect(Math.abs(res.Z / Z - 1), `Tr ${Tr} Pr ${Pr} Z`).toBeLessThan(1e-10);
+          expect(Math.abs(res.HR - HR), `Tr ${Tr} Pr ${Pr} HR`).toBeLessThan(1e-10 * Math.max(Math.abs(HR), R * T));
+          expect(Math.abs(res.SR - SR), `Tr ${Tr} Pr ${Pr} SR`).toBeLessThan(1e-10 * Math.max(Math.abs(SR), R));
+        });
+      }
+    }
   });
 
   it("leeKesler validity warns outside 0.3 <= Tr <= 4, Pr <= 10 and near the critical point", () => {
