@@ -18,6 +18,9 @@
  * Validity: 0.3 <= Tr <= 4 and Pr <= 10 (range of the published tables); outside, `validity` warns.
  * Accuracy: Z within about 1-2 % for non-polar and slightly polar fluids away from the critical point;
  * poor for strongly polar or associating fluids and quantum gases.
+ * Cost: two root solves (lkRoots) per (T, P), shared by volumes() and residual() through a per-model
+ * memo; about 10 us per pure-fluid state by selectRoot, 30-50 us for a binary (component ln phi), see
+ * bench/thermo.ts leeKeslerStateTime.
  */
 import { R } from "../constants.js";
 import { ThermoError, requirePositive } from "../errors.js";
