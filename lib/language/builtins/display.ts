@@ -209,6 +209,15 @@ function runVerify(ctx: BuiltinContext, label: string, value: unknown, target: u
   const relative = (fraction: number) => {
     if (!(fraction >= 0)) throw new ArgumentError(`verify(): a relative tolerance must be zero or positive, got ${fraction}`);
     note = `tolerance ${+(fraction * 100).toPrecision(6)} % of target`;
+    // A percentage of an offset unit (degC, barg) is a percentage of the absolute value, so that
+    // 150 degC and 423.15 K give the same band (units policy: offsets are never silently dropped).
+    const { a, b } = t.unit ? affine(ctx, t.unit) : { a: 0, b: 1 };
+    if (a !== 0) {
+      const absolute = (tn - a) / b;
+      const dim = t.dimension?.replace(/ /g, "_");
+      note += ` (of the absolute ${dim ? ctx.textOf(ctx.units.fromSI(absolute, dim)) : String(absolute)})`;
+      return Math.abs(absolute) * fraction * Math.abs(b);
+    }
     return Math.abs(tn) * fraction;
   };
   if (typeof tolerance === "string") {

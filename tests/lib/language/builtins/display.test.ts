@@ -95,6 +95,18 @@ describe("verify", () => {
     // 1 psi = 6894.757 Pa (NIST SP 811, B.9) so 1 psi = 0.06894757 bar.
     expect(check('verify("P", 10 bar, 10 bar, 1 psi)').tolerance).toBeCloseTo(0.06894757, 7);
   });
+  it("verify takes a percentage of an offset target (degC, barg) of its absolute value", () => {
+    // 150 degC = 423.15 K (definition of the Celsius scale): 5 % is 21.1575 K, the same band as a 423.15 K target.
+    const celsius = check('verify("T", 160 degC, 150 degC, 5%, "atmost")');
+    const kelvin = check('verify("T", 160 degC, 423.15 K, 5%, "atmost")');
+    expect(celsius.tolerance).toBeCloseTo(21.1575, 9);
+    expect(kelvin.tolerance).toBeCloseTo(21.1575, 9);
+    expect(celsius.pass).toBe(true);
+    // 10 barg = 11.01325 bar absolute (gauge against 1 atm = 1.01325 bar): 5 % is 0.5506625 bar.
+    const gauge = check('verify("P", 10.6 barg, 10 barg, 5%, "atmost")');
+    expect(gauge.tolerance).toBeCloseTo(0.5506625, 9);
+    expect(gauge.pass).toBe(false);
+  });
   it("verify reads a compound temperature or pressure in an offset target unit with its offset", () => {
     // PV/(nR) = 100e5 Pa x 1 m^3 / (8.314462618 J/(mol K) x 3000 mol) = 400.90785 K = 127.75785 degC
     // (python3, CODATA 2018 R); mathjs 15 alone read it as 400.908 degC.
