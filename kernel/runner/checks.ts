@@ -11,7 +11,7 @@ export interface CheckRow {
   pass: boolean;
   /** One-line account, e.g. "Z = 0.872 vs target 0.87 +/- 0.01". */
   detail: string;
-  /** 1-based index of the notebook cell that produced it. */
+  /** The code cell that produced it, counted from 1 (as execution counts [n] are). */
   cell: number;
 }
 

@@ -29,6 +29,7 @@ export interface NotebookKernel {
 export interface ExecutedNotebook {
   notebook: Notebook;
   checks: CheckRow[];
+  /** `cell` counts code cells from 1, as the progress line and the execution counts [n] do. */
   errors: { cell: number; message: string }[];
   cellsRun: number;
   codeCells: number;
@@ -81,13 +82,13 @@ export async function executeNotebook(input: Notebook, kernel: NotebookKernel, o
       cell.execution_count = reply.execution_count;
       cellsRun++;
       if (reply.status !== "ok") {
-        errors.push({ cell: i + 1, message: reply.status === "aborted" ? "execution aborted" : `${reply.ename ?? "Error"}: ${reply.evalue ?? ""}` });
+        errors.push({ cell: n + 1, message: reply.status === "aborted" ? "execution aborted" : `${reply.ename ?? "Error"}: ${reply.evalue ?? ""}` });
       }
     } catch (e) {
-      errors.push({ cell: i + 1, message: (e as Error).message });
+      errors.push({ cell: n + 1, message: (e as Error).message });
       cell.outputs.push({ output_type: "error", ename: (e as Error).name, evalue: (e as Error).message, traceback: [(e as Error).message] });
     }
-    checks.push(...checksIn(cell.outputs, i + 1));
+    checks.push(...checksIn(cell.outputs, n + 1));
     if (errors.length) break;
   }
 

@@ -9,7 +9,7 @@ import { ArgsError, parseRunArgs, RUN_HELP, type RunArgs } from "./args.js";
 import { executeNotebook, type NotebookKernel } from "./execute.js";
 import { InProcessKernel, KernelSupply, ProcessKernel } from "./kernels.js";
 import { parseNotebook, serializeNotebook, withCellIds, type Notebook } from "./notebook.js";
-import { injectOverrides } from "./parameters.js";
+import { checkOverrides, injectOverrides } from "./parameters.js";
 import { Progress } from "./progress.js";
 import { escapeHtml, renderReport } from "./report.js";
 
@@ -52,7 +52,9 @@ export async function runNotebook(input: string, args: RunArgs, log: (s: string)
   const base: NotebookOutcome = { input, status: "error", message: "", checks: { total: 0, failed: 0 } };
   let kernel: NotebookKernel | undefined;
   try {
-    const nb = injectOverrides(parseNotebook(readFileSync(input, "utf8"), input), args.overrides);
+    const source = parseNotebook(readFileSync(input, "utf8"), input);
+    checkOverrides(source, args.overrides, input);
+    const nb = injectOverrides(source, args.overrides);
     kernel = await acquire();
     const progress = new Progress({ write: log, isTTY: Boolean(process.stderr.isTTY) && args.jobs === 1 }, basename(input), args.quiet);
     const parameters = Object.fromEntries(args.overrides.map((o) => [o.name, o.expression]));
@@ -73,10 +75,10 @@ export async function runNotebook(input: string, args: RunArgs, log: (s: string)
     if (run.errors.length) {
       const e = run.errors[0]!;
       outcome.status = "error";
-      outcome.message = `cell ${e.cell} failed: ${e.message}` + (run.cellsRun < run.codeCells ? ` (${run.codeCells - run.cellsRun} later cell(s) not run)` : "");
+      outcome.message = `cell [${e.cell}] failed: ${e.message}` + (run.cellsRun < run.codeCells ? ` (${run.codeCells - run.cellsRun} later cell(s) not run)` : "");
     } else if (failed.length) {
       outcome.status = "check-failed";
-      outcome.message = `design check failed: ${failed[0]!.label} (${failed[0]!.detail}), cell ${failed[0]!.cell}` + (failed.length > 1 ? `; ${failed.length - 1} more failed` : "");
+      outcome.message = `design check failed: ${failed[0]!.label} (${failed[0]!.detail}), cell [${failed[0]!.cell}]` + (failed.length > 1 ? `; ${failed.length - 1} more failed` : "");
     } else {
       outcome.message = `${run.codeCells} cells, ${checks.total} design check(s) passed`;
     }

@@ -28,6 +28,35 @@ export function parseOverride(arg: string): Override {
 export const PARAMETERS_TAG = "parameters";
 export const INJECTED_TAG = "injected-parameters";
 
+/** Names a code cell assigns at the start of a line (`P2 = ...`, not `P2 == ...`). */
+export function assignedNames(source: string): Set<string> {
+  const names = new Set<string>();
+  for (const line of source.split("\n")) {
+    for (const statement of line.split(";")) {
+      const m = /^\s*([A-Za-z_][A-Za-z0-9_]*)\s*=(?!=)/.exec(statement);
+      if (m) names.add(m[1]!);
+    }
+  }
+  return names;
+}
+
+/**
+ * A mistyped override would silently leave the notebook's own value in place, so every name must be
+ * assigned by the cell tagged "parameters" (or, without such a cell, by some code cell).
+ */
+export function checkOverrides(nb: Notebook, overrides: Override[], where: string): void {
+  const code = nb.cells.filter((c) => c.cell_type === "code");
+  const tagged = code.filter((c) => (c.metadata.tags as string[] | undefined)?.includes(PARAMETERS_TAG));
+  const pool = tagged.length ? tagged : code;
+  const known = new Set(pool.flatMap((c) => [...assignedNames(Array.isArray(c.source) ? c.source.join("") : c.source)]));
+  const unknown = overrides.filter((o) => !known.has(o.name));
+  if (unknown.length) {
+    const scope = tagged.length ? "its parameters cell" : "its code cells";
+    const list = [...known].sort().join(", ") || "nothing";
+    throw new Error(`${where}: --set ${unknown.map((o) => o.name).join(", ")}: not assigned by ${scope} (which assign${tagged.length ? "s" : ""} ${list}); a mistyped name would leave the notebook's own value in place`);
+  }
+}
+
 export function injectOverrides(nb: Notebook, overrides: Override[]): Notebook {
   if (overrides.length === 0) return nb;
   const source = ["# Parameters set on the command line (caloric run --set)", ...overrides.map((o) => `${o.name} = ${o.expression}`)].join("\n");

@@ -55,9 +55,9 @@ function checksSection(info: ReportInfo): string {
         ? `<p class="verdict fail">FAIL: ${failed} of ${info.checks.length} design check(s) failed</p>`
         : `<p class="verdict pass">PASS: all ${info.checks.length} design check(s) met</p>`;
   const rows = info.checks
-    .map((c) => `<tr><td class="verdict ${c.pass ? "pass" : "fail"}">${c.pass ? "PASS" : "FAIL"}</td><td>${escapeHtml(c.label)}</td><td>${escapeHtml(c.detail)}</td><td class="num">${c.cell}</td></tr>`)
+    .map((c) => `<tr><td class="verdict ${c.pass ? "pass" : "fail"}">${c.pass ? "PASS" : "FAIL"}</td><td>${escapeHtml(c.label)}</td><td>${escapeHtml(c.detail)}</td><td class="num">[${c.cell}]</td></tr>`)
     .join("\n");
-  const errors = info.errors.map((e) => `<li>cell ${e.cell}: ${escapeHtml(e.message)}</li>`).join("");
+  const errors = info.errors.map((e) => `<li>cell [${e.cell}]: ${escapeHtml(e.message)}</li>`).join("");
   return `<section id="checks"><h2>Design checks</h2>${verdict}
 ${info.checks.length ? `<table><thead><tr><th>result</th><th>check</th><th>detail</th><th>cell</th></tr></thead><tbody>${rows}</tbody></table>` : "<p>No design checks in this notebook.</p>"}
 ${errors ? `<ul class="fail">${errors}</ul>` : ""}</section>`;

@@ -206,11 +206,17 @@ describe("caloric run on the fixtures", () => {
     expect(readFileSync(join(r.out, "pass.html"), "utf8")).toContain("FAIL: 1 of 1 design check(s) failed");
   });
 
+  it("caloric run --set with a name the parameters cell does not assign exits 2 and names it", () => {
+    const r = caloricRun([pass, "--set", "Q2=50 bar"]);
+    expect(r.status, show(r)).toBe(2);
+    expect(r.stdout).toMatch(/--set Q2: not assigned by its parameters cell \(which assigns P1, P2\)/);
+  });
+
   it("caloric run: a cell error exits 2 with a message naming the cell, later cells not run", () => {
     const r = caloricRun([error, "--html"]);
     expect(r.status, show(r)).toBe(2);
     // error.ipynb: cell 2 adds a pressure to a mass.
-    expect(r.stdout).toMatch(/error\.ipynb: cell 2 failed: .*units/i);
+    expect(r.stdout).toMatch(/error\.ipynb: cell \[2\] failed: .*units/i);
     const nb = readNotebook(join(r.out, "error.ipynb"));
     const [c1, c2, c3] = codeCells(nb);
     expect(c1!.execution_count).toBe(1);

@@ -36,7 +36,7 @@ describe("executeNotebook", () => {
     const r = await executeNotebook(nb([codeCell("a"), { cell_type: "markdown", source: "m", metadata: {} }, codeCell("b")]), k, { toolVersion: "0.1.0", parameters: { P: "1 bar" } });
     expect(r.cellsRun).toBe(2);
     expect(r.errors).toEqual([]);
-    expect(r.checks).toEqual([{ label: "ok", pass: true, detail: "PASS ok", cell: 3 }]);
+    expect(r.checks).toEqual([{ label: "ok", pass: true, detail: "PASS ok", cell: 2 }]); // the second code cell (a markdown cell sits between)
     expect(r.notebook.cells[0]).toMatchObject({ execution_count: 1, outputs: [{ output_type: "stream", text: "hi\n" }] });
     expect(r.notebook.metadata).toMatchObject({ title: "t", kernelspec: { name: "caloric" }, language_info: { name: "caloric" }, caloric: { version: "0.1.0", parameters: { P: "1 bar" }, checks: { total: 1, failed: 0 } } });
   });
