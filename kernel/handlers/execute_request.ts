@@ -1,13 +1,13 @@
 /**
  * execute_request: execute_input, the cell's outputs (stream, display_data, update_display_data,
  * clear_output), execute_result or error, user_expressions, then the reply. stop_on_error makes
- * requests that arrived before this reply come back "aborted".
+ * requests that arrived before this reply come back "aborted". A help query's answer (the run result
+ * marked help) goes to the pager payload instead of execute_result.
  */
 import type { EngineOutput, RunResult } from "../engine/index.js";
 import type { Json } from "../protocol/index.js";
 import { boolField, stringField } from "./args.js";
 import type { Handler, HandlerContext } from "./context.js";
-import { answerHelp, helpTarget } from "./helpQuery.js";
 
 export const execute_request: Handler = async (ctx) => {
   const c = ctx.request.content;
@@ -27,18 +27,12 @@ export const execute_request: Handler = async (ctx) => {
   if (!silent) void ctx.publish("execute_input", { code, execution_count: count });
 
   const payload: Json[] = [];
-  let result: RunResult;
-  const help = helpTarget(code);
-  if (help !== undefined) {
-    const outcome = await answerHelp(ctx.services.engine, help);
-    if (outcome.kind === "page") payload.push({ source: "page", data: outcome.bundle, start: 0 });
-    else void ctx.publish("stream", { name: "stderr", text: `No help for '${outcome.name}': not a known name.\n` });
-    result = { ok: true };
-  } else {
-    // Publishing enqueues at once on the iopub queue, which keeps the cell's order; not awaiting each
-    // send keeps the round trip short (clients wait for both the reply and idle anyway).
-    result = await ctx.services.engine.execute(code, (o) => void publishOutput(ctx, o));
-  }
+  // Publishing enqueues at once on the iopub queue, which keeps the cell's order; not awaiting each
+  // send keeps the round trip short (clients wait for both the reply and idle anyway).
+  const result: RunResult = await ctx.services.engine.execute(code, (o) => void publishOutput(ctx, o));
+  // A help query (`?name`, answered by the language) goes to the pager, as front ends expect.
+  const page = result.ok && result.help === true && result.result !== undefined;
+  if (page) payload.push({ source: "page", data: result.result as unknown as Json, start: 0 });
 
   if (!result.ok) {
     const { ename, evalue, traceback } = result.error;
@@ -47,7 +41,7 @@ export const execute_request: Handler = async (ctx) => {
     await ctx.reply({ status: "error", execution_count: count, ename, evalue, traceback, user_expressions: {}, payload: [] });
     return;
   }
-  if (result.result && !silent) {
+  if (result.result && !silent && !page) {
     void ctx.publish("execute_result", { execution_count: count, data: result.result, metadata: {} });
     if (storeHistory) execution.history.setOutput(count, result.result["text/plain"]);
   }

@@ -17,12 +17,15 @@ import { createFormatter } from "./format.js";
 import { scanCell, positionOf } from "./statements.js";
 import { foldConstantQuantities } from "./fold.js";
 import { pinUnitLiterals } from "./literals.js";
+import { checkFieldAccess } from "./fields.js";
 import { pollInFunctionBodies } from "./interruptible.js";
 import { sizeGuards } from "./guards.js";
 import { LanguageError, translateError } from "./errors.js";
 import { completeAt } from "./complete.js";
 import { inspectAt } from "./inspect.js";
 import { isCompleteCell } from "./isComplete.js";
+import { answerHelp, helpTarget } from "./helpQuery.js";
+import { rejectAssignments } from "./expression.js";
 import { constantValues } from "./constants.js";
 import type { CellSink, RunResult, Session, SessionOptions } from "./session.js";
 
@@ -120,30 +123,49 @@ export function createSessionWithInternals(
   })();
   const knownNames = () => [...scope.keys(), ...registry.keys(), ...mathNames(), ...unitNames()];
 
-  interface Compiled { evaluate(scope: Map<string, unknown>): unknown; assigned?: string }
+  interface Compiled { evaluate(scope: Map<string, unknown>): unknown; assigned?: string; defines?: string }
   // Parsed statements by source text: re-running a cell skips the parser.
   const compiled = new Map<string, Compiled>();
   const UnitClass = (math as unknown as { Unit: Parameters<typeof pinUnitLiterals>[1] }).Unit;
   // A literal's unit that is also a variable's name (literals.ts): said once per name and session.
   const shadowWarned = new Set<string>();
   const onShadowed = (name: string, literal: string) => {
-    if (shadowWarned.has(name)) return;
+    if (shadowWarned.has(name) || sink === SILENT_SINK) return;
     shadowWarned.add(name);
     ctx!.warn(
       `in "${literal}", ${name} is read as the unit ${name}, not as your variable ${name}: a unit name right after a number is always the unit; to multiply by the variable write the * (as in 2 * ${name})`,
     );
   };
+  // A variable or function named like a built-in hides it for the rest of the session: said once per name.
+  const builtinWarned = new Set<string>();
+  const onBuiltinShadowed = (name: string) => {
+    if (builtinWarned.has(name) || sink === SILENT_SINK) return;
+    builtinWarned.add(name);
+    ctx!.warn(`${name} now names your own value, which hides the built-in ${name}() in this session (until the kernel restarts); pick another name to keep using ${name}()`);
+  };
   const compile = (text: string): Compiled => {
     const node = parse(text) as MathNode & { object?: MathNode & { name?: string } };
     pinUnitLiterals(node, UnitClass, onShadowed);
+    checkFieldAccess(node);
     foldConstantQuantities(node, UnitClass);
     pollInFunctionBodies(node, options.shouldStop, () => new Interrupted());
     const code = node.compile() as Compiled;
     const assigned = node.type === "AssignmentNode" && node.object?.type === "SymbolNode" ? node.object.name : undefined;
-    return { evaluate: (s) => code.evaluate(s), assigned };
+    const defines = assigned ?? (node.type === "FunctionAssignmentNode" ? (node as MathNode & { name: string }).name : undefined);
+    return { evaluate: (s) => code.evaluate(s), assigned, defines };
   };
 
-  const run = (code: string, cellSink: CellSink): RunResult => {
+  const inspect = (code: string, cursorPos: number, detail: 0 | 1) => inspectAt(internals, code, cursorPos, detail);
+
+  /** Runs a cell against `target` (the session's scope, or a copy for evaluateExpression). */
+  const run = (code: string, cellSink: CellSink, target: Map<string, unknown> = scope): RunResult => {
+    const help = helpTarget(code);
+    if (help !== undefined) {
+      const answer = answerHelp(help, inspect, knownNames);
+      if (answer.found) return { ok: true, result: answer.bundle, help: true };
+      cellSink.stdout(answer.note);
+      return { ok: true };
+    }
     sink = cellSink;
     shownIds.clear();
     let pending: MimeBundle | undefined;
@@ -172,7 +194,8 @@ export function createSessionWithInternals(
             if (compiled.size > 2000) compiled.clear();
             compiled.set(st.text, entry);
           }
-          value = entry.evaluate(scope);
+          value = entry.evaluate(target);
+          if (entry.defines !== undefined && registry.has(entry.defines)) onBuiltinShadowed(entry.defines);
         } catch (err) {
           throw translateError(err, code, st.start, st.text, knownNames);
         }
@@ -201,9 +224,17 @@ export function createSessionWithInternals(
   const internals: SessionInternals = { math, scope, registry, knownNames, unitNames, formatText: formatter.text, units, parse, predefined };
   const session: Session = {
     run,
-    evaluateExpression: (expression) => run(expression, SILENT_SINK),
+    evaluateExpression: (expression) => {
+      try {
+        rejectAssignments(expression, parse);
+      } catch (err) {
+        if (err instanceof LanguageError) return { ok: false, error: err.toCellError() };
+        throw err;
+      }
+      return run(expression, SILENT_SINK, new Map(scope));
+    },
     complete: (code, cursorPos) => completeAt(internals, code, cursorPos),
-    inspect: (code, cursorPos, detail) => inspectAt(internals, code, cursorPos, detail),
+    inspect,
     isComplete: (code) => isCompleteCell(code, parse),
   };
   return { session, internals };

@@ -70,6 +70,12 @@ function explain(err: unknown, text: string, names: NameSource): Located {
     const what = m[1] === "function" ? "function" : "name";
     return { kind: "NameError", message: `unknown ${what} "${name}"${hint}`, offset: findWord(text, name), width: Array.from(name).length };
   }
+  if (e?.name === "FieldError" && typeof (e as { field?: unknown }).field === "string") {
+    const field = (e as { field: string }).field;
+    const dot = new RegExp(`\\.\\s*${field.replace(/[.*+?^${}()|[\]\\]/g, "\\$&")}(?![A-Za-z0-9_])`).exec(text);
+    const at = dot ? dot.index + dot[0].length - field.length : text.indexOf(field);
+    return { kind: "FieldError", message, offset: at, width: Array.from(field).length };
+  }
   if (e?.name === "RangeError" && /call stack/i.test(message)) {
     return { kind: "RecursionError", message: "too deeply nested, or a function that calls itself without end" };
   }

@@ -22,7 +22,8 @@ export interface CellError {
 }
 
 export type RunResult =
-  | { ok: true; result?: MimeBundle }
+  /** help: the cell was a help query (`?name`) and result is its help text; a kernel may page it. */
+  | { ok: true; result?: MimeBundle; help?: boolean }
   | { ok: false; error: CellError };
 
 export interface SessionOptions {

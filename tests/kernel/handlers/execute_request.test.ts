@@ -82,13 +82,14 @@ describe("execute_request", () => {
     expect(reply.content.status).toBe("ok");
   });
 
-  it("execute_request with ?name pages the help; an unknown name notes it on stderr", async () => {
+  it("execute_request pages a run result marked help instead of publishing it; other output of a help query passes through", async () => {
     const k = memoryKernel();
     const r = await k.call("shell", "execute_request", exec("?psat"));
     expect(r.reply!.content.payload).toEqual([{ source: "page", data: { "text/plain": "psat(m, T): saturation pressure" }, start: 0 }]);
+    expect(r.types).not.toContain("execute_result");
     const m = await k.call("shell", "execute_request", exec("zzz?"));
-    expect(m.iopub.find((x) => x.header.msg_type === "stream")!.content).toEqual({ name: "stderr", text: "No help for 'zzz': not a known name.\n" });
-    expect(m.reply!.content.status).toBe("ok");
+    expect(m.iopub.find((x) => x.header.msg_type === "stream")!.content).toEqual({ name: "stdout", text: "No help for 'zzz': not a known name\n" });
+    expect(m.reply!.content).toMatchObject({ status: "ok", payload: [] });
   });
 
   it("execute_request rejects a non-string code with an error reply", async () => {

@@ -20,6 +20,16 @@ describe("run", () => {
     // 4 bar = 400 kPa (bar = 100 kPa, NIST SP 811 B.8).
     expect(text(r)).toBe("400 kPa");
   });
+  it("run warns once per name when a variable or function takes a built-in's name", () => {
+    const s = createSession({ shouldStop: () => false });
+    const c = capture();
+    expect(text(s.run("state = 3", c.sink))).toBe("state = 3");
+    s.run("state = 4\npsat(x) = x", c.sink);
+    expect(c.out.filter((t) => /hides the built-in state\(\)/.test(t))).toHaveLength(1);
+    expect(c.out.filter((t) => /hides the built-in psat\(\)/.test(t))).toHaveLength(1);
+    s.run("pressure1 = 2", c.sink);
+    expect(c.out).toHaveLength(2);
+  });
   it("run keeps variables and functions across cells and after errors", () => {
     const s = createSession({ shouldStop: () => false });
     const c = capture();

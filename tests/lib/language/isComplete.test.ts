@@ -19,4 +19,9 @@ describe("isComplete", () => {
     expect(s.isComplete("a = 1\nb = a + 1 # done").status).toBe("complete");
     expect(s.isComplete("").status).toBe("complete");
   });
+  it("isComplete says complete for help queries (?name, name?), whatever the name", () => {
+    for (const code of ["?state", "state?", "R?", "? psat", "?nosuch"]) expect(s.isComplete(code).status, code).toBe("complete");
+    // A question mark inside an expression is still judged by the parser.
+    expect(s.isComplete("a ? b").status).not.toBe("complete");
+  });
 });
