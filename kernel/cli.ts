@@ -63,7 +63,10 @@ async function main(argv: string[]): Promise<number> {
         } else if (a === "--name") name = rest[++i];
         else throw new Error(`install: unknown option ${JSON.stringify(a)} (expected --user, --sys-prefix, --prefix DIR, --name NAME)`);
       }
-      const dir = install({ target, name });
+      // kernel.json runs this very script, wherever it was built.
+      const { fileURLToPath } = await import("node:url");
+      const self = fileURLToPath(import.meta.url);
+      const dir = install({ target, name, cliPath: self.endsWith(".js") ? self : undefined });
       process.stdout.write(`Installed kernelspec ${name ?? "caloric"} in ${dir}\n`);
       return 0;
     }

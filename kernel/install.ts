@@ -1,6 +1,7 @@
 /**
  * `caloric install`: writes the kernelspec (kernel.json + logos) where Jupyter looks for kernels.
- * kernel.json runs this very installation: the absolute node binary and the absolute compiled cli.js.
+ * kernel.json runs this very installation: the absolute node binary and the absolute compiled cli.js
+ * that is running (found from the module's own location, so any build folder works, not only dist/).
  */
 import { execFileSync } from "node:child_process";
 import { copyFileSync, existsSync, mkdirSync, readFileSync, writeFileSync } from "node:fs";
@@ -16,6 +17,8 @@ export interface InstallOptions {
   env?: NodeJS.ProcessEnv;
   /** Absolute path of the node binary kernel.json will run (default: this one). */
   nodePath?: string;
+  /** The compiled cli.js kernel.json will run (default: cliScript(), the one beside this module). */
+  cliPath?: string;
 }
 
 const LOGOS = ["logo-32x32.png", "logo-64x64.png", "logo-svg.svg"];
@@ -29,6 +32,20 @@ export function packageRoot(from = dirname(fileURLToPath(import.meta.url))): str
     if (up === dir) throw new Error(`cannot find kernelspec/kernel.json above ${from}`);
     dir = up;
   }
+}
+
+/**
+ * The compiled `caloric` command of this installation: cli.js beside this module (both are compiled
+ * into the same folder of whatever build directory was used). Run from TypeScript sources (tsx),
+ * kernel.json still needs JavaScript, so it names the default build, ROOT/dist/kernel/cli.js, and
+ * requires it to exist.
+ */
+export function cliScript(moduleUrl: string = import.meta.url, root?: () => string): string {
+  const here = fileURLToPath(moduleUrl);
+  if (here.endsWith(".js")) return join(dirname(here), "cli.js");
+  const built = join((root ?? (() => packageRoot(dirname(here))))(), "dist", "kernel", "cli.js");
+  if (!existsSync(built)) throw new Error(`install: running from sources and ${built} does not exist; build first (npm run build), or run the built cli.js`);
+  return built;
 }
 
 /** Jupyter's per-user data directory, honouring JUPYTER_DATA_DIR as jupyter_core does. */
@@ -62,9 +79,8 @@ export function kernelsDir(target: InstallTarget, env: NodeJS.ProcessEnv = proce
 }
 
 /** The kernel.json content for this installation. */
-export function kernelSpec(root: string, nodePath: string): Record<string, unknown> {
+export function kernelSpec(root: string, nodePath: string, cli: string): Record<string, unknown> {
   const template = JSON.parse(readFileSync(join(root, "kernelspec", "kernel.json"), "utf8")) as { argv: string[] } & Record<string, unknown>;
-  const cli = join(root, "dist", "kernel", "cli.js");
   return { ...template, argv: template.argv.map((a) => a.replace("{node}", nodePath).replace("{cli}", cli)) };
 }
 
@@ -74,9 +90,10 @@ export function install(options: InstallOptions): string {
   const name = options.name ?? "caloric";
   if (!/^[a-z0-9._-]+$/i.test(name)) throw new Error(`--name: use letters, digits, . _ - only, got ${JSON.stringify(name)}`);
   const root = packageRoot();
+  const cli = resolve(options.cliPath ?? cliScript());
   const dir = join(kernelsDir(options.target, env), name);
   mkdirSync(dir, { recursive: true });
-  writeFileSync(join(dir, "kernel.json"), JSON.stringify(kernelSpec(root, options.nodePath ?? process.execPath), null, 2) + "\n");
+  writeFileSync(join(dir, "kernel.json"), JSON.stringify(kernelSpec(root, options.nodePath ?? process.execPath, cli), null, 2) + "\n");
   for (const logo of LOGOS) copyFileSync(join(root, "kernelspec", logo), join(dir, logo));
   return dir;
 }
