@@ -16,6 +16,6 @@ export class ThermoError extends Error {
 /** Throws ThermoError unless `value` is a finite number greater than zero. `unit` is shown in the message. */
 export function requirePositive(argument: string, value: number, unit: string): void {
   if (!Number.isFinite(value) || value <= 0) {
-    throw new ThermoError(argument, `${argument} must be a finite number > 0 ${unit}; got ${value}`);
+    throw new ThermoError(argument, `${argument} must be a finite number > 0 ${unit}; got ${Number.isFinite(value) ? Number(value.toPrecision(6)) : value}`);
   }
 }

@@ -7,7 +7,9 @@
  * States: `state(model, T, P, {phase, idealGas})`, `stateFrom(model, {two of T,P,V,H,S,U}, {idealGas})`,
  * `change(s1, s2)`. Departures: `departure(model, T, P, {phase, route: "closed" | "integrate"})`,
  * `maxwellResidual(model, T, V)`, `internalPressure(model, T, V)`. Saturation: `psat(model, T)`,
- * `tsat(model, P)`. Errors: ThermoError {argument, message}.
+ * `tsat(model, P)`. Cautions no model gives about itself (triple point, far-out pressures) and the
+ * saturation range checks: cautions.ts. Errors: ThermoError {argument, message}, numbers in readable
+ * units (format.ts).
  */
 export { R, P_REF, T_REF, P_ATM } from "./constants.js";
 export { ThermoError } from "./errors.js";
@@ -38,7 +40,13 @@ export { heatCapacity, type HeatCapacities } from "./departure/heatCapacity.js";
 export { getSubstance, suggestSubstances, listSubstances, normalizeName } from "./substances/databank.js";
 export { pseudoComponent, CP_FORM_UNAVAILABLE, type PseudoComponentInput } from "./substances/pseudo.js";
 export type { Substance, CpCorrelation } from "./substances/types.js";
-export { cp as idealGasCp, cpWarnings } from "./idealGas/cp.js";
+export { cp as idealGasCp, cpWarnings, cpRangeClass, cpRangeText, CP_MARGIN, CP_FAR_MARGIN } from "./idealGas/cp.js";
+export {
+  triplePointOf, stateCautions, cautionsFor, requireSaturationT, requireSaturationP, belowTripleText,
+  FAR_PRESSURE_FACTOR, NO_TRIPLE_TR, type TripleInfo,
+} from "./cautions.js";
+export { num as formatNumber, kelvin as kelvinText, pressureText, volumeText, energyText } from "./format.js";
+export { TRIPLE_POINTS, type TriplePoint } from "./substances/triplePoints.js";
 export { mixtureCp, mixtureIdealGasTotals } from "./idealGas/mixture.js";
 export { idealGasTotals, referenceState, DEFAULT_REFERENCE, type ReferenceState, type IdealGasTotals } from "./idealGas/reference.js";
 export { leeKesler, type LeeKeslerModel, type LeeKeslerMixing } from "./eos/leekesler.js";

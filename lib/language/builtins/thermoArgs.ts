@@ -3,7 +3,7 @@
  * name the user's argument and function, fluids from names / substances / mixtures, quantities or
  * arrays of quantities to SI numbers (once per array), and the broadcast loop of vectorised calls.
  */
-import { if97Tsat, ThermoError, WATER_P_CRIT_MPA, type Fluid } from "../../thermo/index.js";
+import { if97Tsat, kelvinText, pressureText, ThermoError, volumeText, WATER_P_CRIT_MPA, type Fluid } from "../../thermo/index.js";
 import { isQuantityColumn } from "../values/column.js";
 import { thermoDataOf } from "../values/thermo.js";
 import { ArgumentError } from "./bind.js";
@@ -69,12 +69,89 @@ export function pick(inputs: Record<string, number | Float64Array>, i: number, i
   return into;
 }
 
-/** Requires an absolute temperature or pressure above zero, naming the argument. */
+/** Requires a finite absolute temperature, pressure or volume above zero, naming the argument. */
 export function requireAbove0(fn: string, name: string, value: number, unit: "K" | "Pa" | "m^3/mol"): void {
   if (!(value > 0) || !Number.isFinite(value)) {
     const what = unit === "K" ? "0 K (absolute temperature)" : unit === "Pa" ? "0 Pa (absolute pressure)" : "0 m^3/mol";
-    throw new ArgumentError(`argument ${name} of ${fn}() must be above ${what}, got ${value} ${unit}`);
+    const got = !Number.isFinite(value) ? String(value) : unit === "K" ? kelvinText(value) : unit === "Pa" ? pressureText(value) : volumeText(value);
+    throw new ArgumentError(`argument ${name} of ${fn}() must be above ${what}${Number.isFinite(value) ? "" : " and finite"}, got ${got}`);
   }
+}
+
+/**
+ * The phase argument in either form every thermo built-in accepts: a positional string ("liquid") or an
+ * options record ({phase: "liquid"}); "vapour" is read as "vapor". Undefined -> undefined (stable).
+ * `allowed` lists other option keys the record may carry (departure's route and rel).
+ */
+export function phaseArg(value: unknown, fn: string, ctx: BuiltinContext, allowed: readonly string[] = []): "stable" | "liquid" | "vapor" | undefined {
+  let v = value;
+  if (typeof value === "object" && value !== null && !isVectorArg(value) && !isUnitLike(value) && thermoDataOf(value) === undefined) {
+    const o = value as Record<string, unknown>;
+    for (const k of Object.keys(o)) {
+      if (k !== "phase" && !allowed.includes(k)) throw new ArgumentError(`option "${k}" of ${fn}() is not known; valid options: ${["phase", ...allowed].join(", ")}`);
+    }
+    v = o.phase;
+  }
+  if (v === undefined) return undefined;
+  if (v === "vapour") return "vapor";
+  if (v === "stable" || v === "liquid" || v === "vapor") return v;
+  throw new ArgumentError(`argument phase of ${fn}() must be "stable", "liquid" or "vapor" (as text, or as a record {phase: "liquid"}), got ${ctx.textOf(v)}`);
+}
+
+/**
+ * Distinct notes of the points of a call, once each: a note on every point as is, one on some with
+ * "(k of n points)". Notes that differ only in their numbers count as one (the first one is shown).
+ */
+export function noteGroups() {
+  const groups = new Map<string, { text: string; count: number }>();
+  return {
+    add(notes: readonly string[] | undefined): void {
+      if (!notes) return;
+      for (const text of notes) {
+        const key = text.replace(/[-+]?\d[\d.]*(e[-+]?\d+)?/g, "#");
+        const g = groups.get(key);
+        if (g) g.count++;
+        else groups.set(key, { text, count: 1 });
+      }
+    },
+    texts(n: number): string[] {
+      return [...groups.values()].map((g) => (g.count >= n ? g.text : `${g.text} (${g.count} of ${n} points${/\d/.test(g.text) ? ", first shown" : ""})`));
+    },
+  };
+}
+
+/**
+ * A property built-in over scalars or arrays (spans, columns) with its cautions: inputs are converted
+ * once (siArg), `point` gives the SI value and the notes of one point; the result is a quantity or a
+ * column of `dim`, and each distinct note is shown once as a warning naming the call.
+ */
+export function propertyCall(
+  fn: string,
+  inputs: Record<string, number | Float64Array>,
+  dim: string,
+  point: (a: Record<string, number>) => { value: number; notes?: readonly string[] },
+  ctx: BuiltinContext,
+): unknown {
+  const n = lengthOf(fn, inputs);
+  const args: Record<string, number> = {};
+  const notes = noteGroups();
+  let out: unknown;
+  if (n === undefined) {
+    const r = point(pick(inputs, 0, args));
+    notes.add(r.notes);
+    out = ctx.units.fromSI(r.value, dim);
+  } else {
+    const values = new Float64Array(n);
+    for (let i = 0; i < n; i++) {
+      if ((i & 255) === 0 && ctx.shouldStop()) throw ctx.interrupted();
+      const r = atElement(i, n, () => point(pick(inputs, i, args)));
+      values[i] = r.value;
+      notes.add(r.notes);
+    }
+    out = ctx.column(values, dim);
+  }
+  for (const t of notes.texts(n ?? 1)) ctx.warn(`${fn}(): ${t}`);
+  return out;
 }
 
 /** The same check over a vector input: reports the first bad element with its 1-based index. */

@@ -3,7 +3,7 @@
  * (Cp and totals against a declared reference state) and molar mass, ready for state() and friends.
  */
 import {
-  CP_FORM_UNAVAILABLE, DEFAULT_REFERENCE, R, enthalpyIntegral, entropyIntegral, idealGas, idealGasCp, idealGasFunctions,
+  CP_FORM_UNAVAILABLE, DEFAULT_REFERENCE, R, cautionsFor, cpRangeClass, cpRangeText, enthalpyIntegral, entropyIntegral, idealGas, idealGasCp, idealGasFunctions,
   idealMixingEntropy, leeKesler,
   pseudoCritical, pr, referenceState, rk, srk, vdw, virial,
   type EosModel, type Fluid, type ReferenceState,
@@ -77,17 +77,22 @@ export function idealGasPart(fluid: Fluid, ref: ReferenceState): IdealGasPart | 
     },
     reference: f.reference,
     // One text per component and range (not per T), so a vectorised call lists each caution once.
+    // Flagged by lib/thermo's rule (cpRangeClass): beyond 10 % outside the fitted range, "far outside"
+    // beyond 50 %; the reference temperature counts too (the totals integrate Cp from it).
     warnings: (T) => {
-      const out: string[] = [];
+      let out: string[] | undefined;
       for (const c of comps) {
-        if (T < c.cp.Tmin || T > c.cp.Tmax || ref.T < c.cp.Tmin || ref.T > c.cp.Tmax) {
-          out.push(`ideal-gas Cp of ${c.name} extrapolated outside its fitted range ${c.cp.Tmin} to ${c.cp.Tmax} K`);
-        }
+        const a = cpRangeClass(c.cp.Tmin, c.cp.Tmax, T);
+        const b = cpRangeClass(c.cp.Tmin, c.cp.Tmax, ref.T);
+        const cls = a === "far" || b === "far" ? "far" : a ?? b;
+        if (cls) (out ??= []).push(cpRangeText(c.name, c.cp.Tmin, c.cp.Tmax, cls));
       }
-      return out;
+      return out ?? NO_WARNINGS;
     },
   };
 }
+
+const NO_WARNINGS: string[] = [];
 
 /** The model value for `id` on a fluid; `options` is the user's option record (validated here). */
 export function modelValue(id: ModelId, fluid: Fluid, options: Record<string, unknown> | undefined, ctx: BuiltinContext): ThermoValue {
@@ -119,6 +124,7 @@ export function modelValue(id: ModelId, fluid: Fluid, options: Record<string, un
     kind: "model", id, label: eos.label, source: eos.source, fluidText, eos, M, Tc: crit.Tc, Pc: crit.Pc,
     ...(typeof part === "string" ? { noTotals: part } : { idealGas: part }),
     ...(validity ? { validity } : {}),
+    cautions: cautionsFor(eos),
   };
   const fields: Record<string, unknown> = {
     model: eos.label,

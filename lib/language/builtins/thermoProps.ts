@@ -1,17 +1,21 @@
 /**
  * Thermodynamics built-ins, part 3: single properties. pressure(m, T, V), volume(m, T, P),
- * zfactor(m, T, P), internal_pressure(m, T, V), psat(m, T), tsat(m, P). All vectorise over spans.
+ * zfactor(m, T, P), internal_pressure(m, T, V), psat(m, T), tsat(m, P). All vectorise over spans;
+ * volume, zfactor, psat and tsat show state()'s cautions as warnings, each once per call.
  */
 import {
-  if97Psat, if97Tsat, if97State, internalPressure, psat as thermoPsat, selectRoot, tsat as thermoTsat, M_WATER, R,
+  if97Psat, if97Tsat, if97State, internalPressure, kelvinText, pressureText, psat as thermoPsat, requireSaturationP,
+  requireSaturationT, selectRoot, tsat as thermoTsat, M_WATER, R, type StateFlags,
 } from "../../thermo/index.js";
 import { modelDataOf, type ModelData } from "../values/thermo.js";
 import { ArgumentError } from "./bind.js";
 import { defineBuiltin, type BuiltinContext, type BuiltinDef } from "./define.js";
-import { guard, if97SaturationHint, requireAbove0 } from "./thermoArgs.js";
+import { guard, if97SaturationHint, phaseArg, propertyCall, requireAbove0, siArg } from "./thermoArgs.js";
+import { notesFor } from "./thermoRows.js";
 
-const PHASE_PARAM = { name: "phase", type: "string", optional: true, choices: ["stable", "liquid", "vapor", "vapour"], doc: '"stable" (default), "liquid" or "vapor" root' } as const;
+const PHASE_PARAM = { name: "phase", type: "any", optional: true, doc: '"stable" (default), "liquid" or "vapor" root, as text or as a record {phase: "liquid"}' } as const;
 const rename = { p: "P" };
+const NO_FLAGS: StateFlags = { supercritical: false, nearCritical: false, metastable: false, twoPhase: false, multipleRoots: false, mixtureSinglePhase: false };
 
 function eosOf(m: unknown, fn: string, what: string): ModelData {
   const d = modelDataOf(m)!;
@@ -19,26 +23,34 @@ function eosOf(m: unknown, fn: string, what: string): ModelData {
   return d;
 }
 
-/** Root V (m^3/mol) and Z at T, P by the model (or IF97). */
-function rootAt(m: unknown, T: number, P: number, phase: string | undefined, fn: string, ctx: BuiltinContext): { V: number; Z: number } {
+/** Root V (m^3/mol) and Z at T, P by the model (or IF97), with the cautions state() would give. */
+function rootAt(m: unknown, T: number, P: number, ph: string, fn: string, ctx: BuiltinContext): { V: number; Z: number; notes?: readonly string[] } {
   requireAbove0(fn, "T", T, "K");
   requireAbove0(fn, "P", P, "Pa");
   const d = modelDataOf(m)!;
-  const ph = phase === "vapour" ? "vapor" : phase ?? "stable";
   if (d.id === "if97") {
     const st = guard(fn, () => if97State({ T, p: P }), rename);
     if (ph !== "stable" && st.phase !== ph) {
       const hint = if97SaturationHint(T, P, ph, fn === "volume" ? ".V" : ".Z", ctx);
-      throw new ArgumentError(`argument phase of ${fn}(): water at T = ${Number(T.toPrecision(6))} K, P = ${Number(P.toPrecision(6))} Pa is ${st.phase} (IF97 region ${st.region}); IF97 gives only the stable phase${hint}`);
+      throw new ArgumentError(`argument phase of ${fn}(): water at T = ${kelvinText(T)}, P = ${pressureText(P)} is ${st.phase} (IF97 region ${st.region}); IF97 gives only the stable phase${hint}`);
     }
     const V = st.v * M_WATER;
     return { V, Z: (P * V) / (R * T) };
   }
   if (ph === "liquid" && T >= d.Tc) {
-    throw new ArgumentError(`argument phase of ${fn}(): liquid root asked of a supercritical fluid at T = ${Number(T.toPrecision(5))} K > Tc = ${Number(d.Tc.toPrecision(5))} K (${d.fluidText})`);
+    throw new ArgumentError(`argument phase of ${fn}(): liquid root asked of a supercritical fluid at T = ${kelvinText(T)} > Tc = ${kelvinText(d.Tc)} (${d.fluidText})`);
   }
   const c = guard(fn, () => selectRoot(d.eos!, T, P, ph as "stable"));
-  return { V: c.V, Z: c.residual.Z };
+  return { V: c.V, Z: c.residual.Z, notes: notesFor(d, T, P, c.phase, c.flags, undefined, false) };
+}
+
+/** Quantity or array argument -> SI (the property built-ins vectorise themselves to show each caution once). */
+const si = (v: unknown, dim: string, name: string, fn: string, ctx: BuiltinContext) => siArg(v, dim, name, fn, ctx);
+
+/** Saturation notes: near-critical (the flag rule of eos/phase.ts) and the model's validity range. */
+function saturationNotes(d: ModelData, T: number, P: number): string[] {
+  const flags = { ...NO_FLAGS, nearCritical: Math.abs(T / d.Tc - 1) < 0.03 && Math.abs(P / d.Pc - 1) < 0.1 };
+  return notesFor(d, T, P, "two-phase", flags, undefined, false);
 }
 
 export const thermoProps: BuiltinDef[] = [
@@ -68,32 +80,44 @@ export const thermoProps: BuiltinDef[] = [
     group: "thermo",
     params: [
       { name: "m", type: "model", doc: "a model" },
-      { name: "T", type: "quantity", dim: "temperature", doc: "temperature" },
-      { name: "P", type: "quantity", dim: "pressure", doc: "pressure" },
+      { name: "T", type: "quantity", doc: "temperature (or a span of them)" },
+      { name: "P", type: "quantity", doc: "pressure (or a span of them)" },
       PHASE_PARAM,
     ],
     returns: "molar_volume",
     doc: "Molar volume at T, P: the stable root (lowest Gibbs energy), or the liquid or vapour root on request.",
     method: "All real roots of the equation of state; the middle (unstable) root of three is never returned.",
-    examples: ['volume(pr("n-butane"), 350 K, 9.4573 bar, "liquid")', 'volume(if97(), 300 K, 1 bar)'],
-    vectorize: true,
-    impl: ({ m, T, P, phase }, ctx) => rootAt(m, T, P, phase, "volume", ctx).V,
+    examples: ['volume(pr("n-butane"), 350 K, 9.4573 bar, "liquid")', 'volume(pr("n-butane"), 350 K, 9.4573 bar, {phase: "vapor"})', 'volume(if97(), 300 K, 1 bar)'],
+    impl: ({ m, T, P, phase }, ctx) => {
+      const ph = phaseArg(phase, "volume", ctx) ?? "stable";
+      const inputs = { T: si(T, "temperature", "T", "volume", ctx), P: si(P, "pressure", "P", "volume", ctx) };
+      return propertyCall("volume", inputs, "molar_volume", (a) => {
+        const r = rootAt(m, a.T!, a.P!, ph, "volume", ctx);
+        return { value: r.V, notes: r.notes };
+      }, ctx);
+    },
   }),
   defineBuiltin({
     name: "zfactor",
     group: "thermo",
     params: [
       { name: "m", type: "model", doc: "a model" },
-      { name: "T", type: "quantity", dim: "temperature", doc: "temperature" },
-      { name: "P", type: "quantity", dim: "pressure", doc: "pressure" },
+      { name: "T", type: "quantity", doc: "temperature (or a span of them)" },
+      { name: "P", type: "quantity", doc: "pressure (or a span of them)" },
       PHASE_PARAM,
     ],
     returns: "dimensionless",
     doc: "Compressibility factor Z = P V / (R T) at T, P (stable root unless a phase is asked).",
     method: "Z of the chosen volume root.",
     examples: ['zfactor(pr("methane"), 250 K, 60 bar)', 'zfactor(lk("propane"), span(350 K, 450 K, 3), 20 bar)'],
-    vectorize: true,
-    impl: ({ m, T, P, phase }, ctx) => rootAt(m, T, P, phase, "zfactor", ctx).Z,
+    impl: ({ m, T, P, phase }, ctx) => {
+      const ph = phaseArg(phase, "zfactor", ctx) ?? "stable";
+      const inputs = { T: si(T, "temperature", "T", "zfactor", ctx), P: si(P, "pressure", "P", "zfactor", ctx) };
+      return propertyCall("zfactor", inputs, "dimensionless", (a) => {
+        const r = rootAt(m, a.T!, a.P!, ph, "zfactor", ctx);
+        return { value: r.Z, notes: r.notes };
+      }, ctx);
+    },
   }),
   defineBuiltin({
     name: "internal_pressure",
@@ -120,18 +144,21 @@ export const thermoProps: BuiltinDef[] = [
     group: "thermo",
     params: [
       { name: "m", type: "model", doc: "a model of a pure fluid, or if97()" },
-      { name: "T", type: "quantity", dim: "temperature", doc: "temperature below the critical temperature" },
+      { name: "T", type: "quantity", doc: "temperature (or a span), between the triple point and the critical temperature" },
     ],
     returns: "pressure",
     doc: "Saturation (vapour) pressure at T.",
     method: "Equation of state: equal fugacity of the liquid and vapour roots (Newton on ln P from Wilson's estimate). if97(): the IF97 region 4 saturation equation.",
     examples: ['psat(pr("propane"), 300 K)', "psat(if97(), 100 degC)"],
-    vectorize: true,
-    impl: ({ m, T }) => {
+    impl: ({ m, T }, ctx) => {
       const d = modelDataOf(m)!;
-      requireAbove0("psat", "T", T, "K");
-      if (d.id === "if97") return guard("psat", () => if97Psat(T), rename);
-      return guard("psat", () => thermoPsat(d.eos!, T).P, { model: "m" });
+      return propertyCall("psat", { T: si(T, "temperature", "T", "psat", ctx) }, "pressure", ({ T: t }) => {
+        requireAbove0("psat", "T", t!, "K");
+        if (d.id === "if97") return { value: guard("psat", () => if97Psat(t!), rename) };
+        guard("psat", () => requireSaturationT(d.eos!, t!));
+        const P = guard("psat", () => thermoPsat(d.eos!, t!).P, { model: "m" });
+        return { value: P, notes: saturationNotes(d, t!, P) };
+      }, ctx);
     },
   }),
   defineBuiltin({
@@ -139,18 +166,22 @@ export const thermoProps: BuiltinDef[] = [
     group: "thermo",
     params: [
       { name: "m", type: "model", doc: "a model of a pure fluid, or if97()" },
-      { name: "P", type: "quantity", dim: "pressure", doc: "pressure below the critical pressure" },
+      { name: "P", type: "quantity", doc: "pressure (or a span), between the triple-point and the critical pressure" },
     ],
     returns: "temperature",
     doc: "Saturation temperature at P (boiling point at that pressure).",
     method: "Equation of state: equal fugacity, Newton on T with the Clausius-Clapeyron slope. if97(): the IF97 region 4 backward saturation equation.",
     examples: ['tsat(pr("propane"), 10 bar)', "tsat(if97(), 1 atm)"],
-    vectorize: true,
-    impl: ({ m, P }) => {
+    impl: ({ m, P }, ctx) => {
       const d = modelDataOf(m)!;
-      requireAbove0("tsat", "P", P, "Pa");
-      if (d.id === "if97") return guard("tsat", () => if97Tsat(P), rename);
-      return guard("tsat", () => thermoTsat(d.eos!, P).T, { model: "m" });
+      return propertyCall("tsat", { P: si(P, "pressure", "P", "tsat", ctx) }, "temperature", ({ P: p }) => {
+        requireAbove0("tsat", "P", p!, "Pa");
+        if (d.id === "if97") return { value: guard("tsat", () => if97Tsat(p!), rename) };
+        guard("tsat", () => requireSaturationP(d.eos!, p!));
+        const T = guard("tsat", () => thermoTsat(d.eos!, p!).T, { model: "m" });
+        guard("tsat", () => requireSaturationP(d.eos!, p!, T));
+        return { value: T, notes: saturationNotes(d, T, p!) };
+      }, ctx);
     },
   }),
 ];

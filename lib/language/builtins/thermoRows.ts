@@ -4,7 +4,7 @@
  * names and their dimensions are the product's interface (DESIGN.md section 4).
  */
 import {
-  PHASE_LABELS, STATE_FLAG_BITS, cubicStateColumns, heatCapacity, isPureCubic, state as thermoState, type ThermoState,
+  PHASE_LABELS, STATE_FLAG_BITS, cubicStateColumns, heatCapacity, isPureCubic, state as thermoState, type StateFlags, type ThermoState,
 } from "../../thermo/index.js";
 import type { ModelData } from "../values/thermo.js";
 import type { BuiltinContext } from "./define.js";
@@ -35,20 +35,30 @@ const NOTE = {
   mixture: "mixture treated as one phase (no phase-split test was made)",
 } as const;
 
-/** Notes from a thermo state's flags, the Cp correlation range and the model's validity range. */
-function notesOf(d: ModelData, s: ThermoState): string[] {
+/**
+ * Notes of a state at T, P with root label `phase` and flags `f` (x: vapour fraction of a two-phase
+ * state): the flags, the Cp correlation range, the model's validity range and lib/thermo's cautions
+ * (triple point, P > 10 Pc). state(), departure(), volume(), zfactor(), psat() and tsat() all use it;
+ * `totals: false` leaves out what concerns only ideal-gas totals (Cp range, missing Cp) and the purely
+ * descriptive "supercritical", for results that use neither (Z, V, departures, saturation).
+ */
+export function notesFor(d: ModelData, T: number, P: number, phase: string, f: StateFlags, x?: number, totals = true): string[] {
   const notes: string[] = [];
-  const f = s.flags;
   if (f.nearCritical) notes.push(NOTE.nearCritical);
-  if (f.supercritical) notes.push(NOTE.supercritical);
+  if (f.supercritical && totals) notes.push(NOTE.supercritical);
   if (f.metastable) notes.push(NOTE.metastable);
-  if (f.twoPhase && s.x === undefined) notes.push(NOTE.saturation);
-  if (s.x !== undefined) notes.push(NOTE.twoPhase);
+  if (f.twoPhase && x === undefined) notes.push(NOTE.saturation);
+  if (x !== undefined) notes.push(NOTE.twoPhase);
   if (f.mixtureSinglePhase) notes.push(NOTE.mixture);
-  if (d.noTotals) notes.push(d.noTotals);
-  if (d.idealGas) notes.push(...d.idealGas.warnings(s.T));
-  if (d.validity) notes.push(...d.validity(s.T, s.P));
+  if (d.noTotals && totals) notes.push(d.noTotals);
+  if (d.idealGas && totals) notes.push(...d.idealGas.warnings(T));
+  if (d.validity) notes.push(...d.validity(T, P));
+  if (d.cautions) notes.push(...d.cautions(T, P, phase));
   return notes;
+}
+
+function notesOf(d: ModelData, s: ThermoState): string[] {
+  return notesFor(d, s.T, s.P, s.phase, s.flags, s.x);
 }
 
 /** SI row of an equation-of-state ThermoState (adds specific values, fugacity, Cp, Cv, w). */
@@ -255,6 +265,10 @@ export function fastEosColumns(d: ModelData, T: Float64Array | number, P: Float6
     }
     if (d.validity) {
       const ws = d.validity(Tcol[i]!, Pcol[i]!);
+      for (let j = 0; j < ws.length; j++) col.note(ws[j]!);
+    }
+    if (d.cautions) {
+      const ws = d.cautions(Tcol[i]!, Pcol[i]!, labels[c.phase[i]!]!);
       for (let j = 0; j < ws.length; j++) col.note(ws[j]!);
     }
   }

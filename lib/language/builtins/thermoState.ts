@@ -8,11 +8,10 @@ import { UnitsError } from "../../units/index.js";
 import { modelDataOf, type ModelData } from "../values/thermo.js";
 import { ArgumentError } from "./bind.js";
 import { defineBuiltin, type BuiltinContext, type BuiltinDef } from "./define.js";
-import { atElement, guard, if97SaturationHint, lengthOf, pick, requireAllAbove0, siArg } from "./thermoArgs.js";
-import { columnCollector, eosRowAt, fastEosColumns, recordOf, rowOf } from "./thermoRows.js";
+import { atElement, guard, if97SaturationHint, lengthOf, noteGroups, phaseArg, pick, requireAllAbove0, siArg } from "./thermoArgs.js";
+import { columnCollector, eosRowAt, fastEosColumns, notesFor, recordOf, rowOf } from "./thermoRows.js";
 import { waterAt, waterDeparture, waterFromSpec, type Row } from "./water.js";
 
-const PHASES = ["stable", "liquid", "vapor", "vapour"];
 const SPEC_DIMS: Record<string, string> = {
   T: "temperature", P: "pressure", V: "molar_volume", v: "specific_volume", rho: "density",
   H: "molar_energy", h: "specific_energy", S: "molar_entropy", s: "specific_entropy",
@@ -122,6 +121,36 @@ const DEPARTURE_FIELDS = {
   lnphi: "dimensionless", phi: "dimensionless", AR_error: "molar_energy", SR_error: "molar_entropy", evaluations: "dimensionless",
 } as const;
 
+/**
+ * departure() over scalars or spans: one record of SI numbers (bind wraps them), or one of columns; the
+ * model is named and each distinct caution listed once (with its count of points when not on all).
+ */
+function departureRecord(d: ModelData, inputs: Record<string, number | Float64Array>, point: (a: Record<string, number>) => Row, ctx: BuiltinContext): Record<string, unknown> {
+  const fn = "departure";
+  const n = lengthOf(fn, inputs);
+  const args: Record<string, number> = {};
+  const model = `${d.label}; ${d.fluidText}`;
+  if (n === undefined) return { ...point(pick(inputs, 0, args)), model };
+  const rows: Row[] = [];
+  const notes = noteGroups();
+  for (let i = 0; i < n; i++) {
+    if ((i & 255) === 0 && ctx.shouldStop()) throw ctx.interrupted();
+    const r = atElement(i, n, () => point(pick(inputs, i, args)));
+    rows.push(r);
+    notes.add(typeof r.notes === "string" ? r.notes.split("; ") : undefined);
+  }
+  const out: Record<string, unknown> = {};
+  for (const [k, dim] of Object.entries(DEPARTURE_FIELDS)) {
+    if (typeof rows[0]![k] === "number") out[k] = ctx.column(Float64Array.from(rows, (r) => r[k] as number), dim);
+    if (k === "V") out.phase = rows.map((r) => r.phase);
+  }
+  out.route = rows[0]!.route;
+  out.model = model;
+  const texts = notes.texts(n);
+  if (texts.length > 0) out.notes = texts.join("; ");
+  return out;
+}
+
 const CHANGE = { T: "temperature", P: "pressure", V: "molar_volume", H: "molar_energy", S: "molar_entropy", U: "molar_energy", G: "molar_energy", A: "molar_energy" } as const;
 
 export const thermoState: BuiltinDef[] = [
@@ -132,7 +161,7 @@ export const thermoState: BuiltinDef[] = [
       { name: "m", type: "model", doc: 'a model: pr("propane"), if97(), ...' },
       { name: "T", type: "any", doc: "temperature (or a span of them), or a record of two properties like {P: 10 bar, H: 5 kJ/mol}" },
       { name: "P", type: "any", optional: true, doc: "pressure (or a span of them)" },
-      { name: "phase", type: "string", optional: true, choices: PHASES, doc: '"stable" (default, lowest Gibbs energy), "liquid" or "vapor" root' },
+      { name: "phase", type: "any", optional: true, doc: '"stable" (default, lowest Gibbs energy), "liquid" or "vapor" root, as text or as a record {phase: "liquid"}' },
     ],
     returns: "record",
     doc: "The state of a fluid: T, P, phase, V, v, rho, Z, totals H, S, U, G, A (molar, vs the stated reference) and h, s, u, g, a (per mass), departures HR, SR, UR, GR, AR, phi, lnphi, f (fugacity), Cp, Cv, cp, cv, w (speed of sound), x (vapour fraction) when two-phase, the model, reference and cautions. Read fields as s.H, s.Z ...; spans give columns.",
@@ -141,7 +170,7 @@ export const thermoState: BuiltinDef[] = [
     examples: ['state(pr("propane"), 350 K, 10 bar)', 'state(pr("propane"), 300 K, 20 bar, "liquid").rho', 'state(srk("methane"), span(200 K, 300 K, 3), 50 bar).Z', 'state(pr("propane"), {P: 10 bar, H: 15 kJ/mol}).T', "state(if97(), {P: 10 bar, x: 0.5}).h"],
     impl: ({ m, T, P, phase }, ctx) => {
       const d = dataOf(m);
-      const ph = phase === "vapour" ? "vapor" : (phase as string | undefined);
+      const ph = phaseArg(phase, "state", ctx);
       if (isPlainRecord(T)) {
         if (P !== undefined || phase !== undefined) throw new ArgumentError("state(m, {..}) takes the two properties in one record; remove the arguments after it");
         return stateFromRecord(d, T, ctx);
@@ -164,39 +193,44 @@ export const thermoState: BuiltinDef[] = [
     group: "thermo",
     params: [
       { name: "m", type: "model", doc: "an equation-of-state model" },
-      { name: "T", type: "quantity", dim: "temperature", doc: "temperature" },
-      { name: "P", type: "quantity", dim: "pressure", doc: "pressure" },
-      { name: "options", type: "record", optional: true, doc: '{route: "closed" | "integrate", phase: "stable" | "liquid" | "vapor", rel: 1e-10}' },
+      { name: "T", type: "quantity", doc: "temperature (or a span of them)" },
+      { name: "P", type: "quantity", doc: "pressure (or a span of them)" },
+      { name: "options", type: "any", optional: true, doc: '{route: "closed" | "integrate", phase: "stable" | "liquid" | "vapor", rel: 1e-10}, or the phase alone as text ("liquid")' },
     ],
     returns: "record",
     fields: DEPARTURE_FIELDS,
-    doc: "Departure (residual) functions at T, P: HR, SR, UR, GR, AR, lnphi, phi, Z, V. route \"integrate\" computes them by integrating the Maxwell relation from V = infinity using only P(T, V), and reports its quadrature error estimates, so you can see it agree with the closed form.",
+    doc: "Departure (residual) functions at T, P: HR, SR, UR, GR, AR, lnphi, phi, Z, V, with the model that produced them and the same cautions as state(). route \"integrate\" computes them by integrating the Maxwell relation from V = infinity using only P(T, V), and reports its quadrature error estimates, so you can see it agree with the closed form.",
     method: "closed: the model's closed forms. integrate: A^R and S^R as integrals over density of the residual pressure and its T-derivative (adaptive Gauss-Kronrod), then H^R, U^R, G^R, ln phi.",
     source: "lib/thermo/departure (closed forms per model; numerical Maxwell route)",
-    examples: ['departure(pr("propane"), 350 K, 10 bar)', 'departure(pr("propane"), 350 K, 10 bar, {route: "integrate"}).HR'],
-    vectorize: true,
+    examples: ['departure(pr("propane"), 350 K, 10 bar)', 'departure(pr("propane"), 350 K, 10 bar, {route: "integrate"}).HR', 'departure(pr("propane"), 300 K, 20 bar, "liquid").HR'],
     impl: ({ m, T, P, options }, ctx) => {
       const d = dataOf(m);
-      const o = (options ?? {}) as Record<string, unknown>;
-      for (const k of Object.keys(o)) if (!["route", "phase", "rel"].includes(k)) throw new ArgumentError(`option "${k}" of departure() is not known; valid options: route, phase, rel`);
-      if (d.id === "if97") return waterDeparture(T, P, o, "departure");
+      const fn = "departure";
+      const o = (typeof options === "object" && options !== null ? options : {}) as Record<string, unknown>;
+      const phase = phaseArg(options, fn, ctx, ["route", "rel"]) ?? "stable";
+      const inputs = { T: siArg(T, "temperature", "T", fn, ctx), P: siArg(P, "pressure", "P", fn, ctx) };
+      requireAllAbove0(fn, "T", inputs.T, "K");
+      requireAllAbove0(fn, "P", inputs.P, "Pa");
       const route = o.route ?? "closed";
       if (route !== "closed" && route !== "integrate") throw new ArgumentError(`option route of departure() must be "closed" or "integrate", got ${ctx.textOf(route)}`);
-      const phase = o.phase === "vapour" ? "vapor" : (o.phase ?? "stable") as "stable";
-      const rel = o.rel === undefined ? undefined : ctx.units.toSI(o.rel, "dimensionless", "rel", "departure");
-      requireAllAbove0("departure", "T", T, "K");
-      requireAllAbove0("departure", "P", P, "Pa");
-      const closed = guard("departure", () => thermoDeparture(d.eos!, T, P, { phase, route: "closed" }));
-      const base = { T, P, V: closed.V, phase: closed.phase, route };
-      if (route === "closed") {
-        const { Z, HR, SR, UR, GR, AR, lnphi } = closed;
-        return { ...base, Z, HR, SR, UR, GR, AR, lnphi, phi: Math.exp(lnphi) };
-      }
-      const r = guard("departure", () => maxwellResidual(d.eos!, T, closed.V, { rel, shouldStop: ctx.shouldStop }));
-      return {
-        ...base, Z: r.Z, HR: r.HR, SR: r.SR, UR: r.UR, GR: r.GR, AR: r.AR, lnphi: r.lnphi, phi: Math.exp(r.lnphi),
-        AR_error: r.errors.AR, SR_error: r.errors.SR, evaluations: r.evaluations,
+      const rel = o.rel === undefined ? undefined : ctx.units.toSI(o.rel, "dimensionless", "rel", fn);
+      const point = (a: Record<string, number>): Row => {
+        if (d.id === "if97") return waterDeparture(a.T!, a.P!, { ...o, phase }, fn);
+        const closed = guard(fn, () => thermoDeparture(d.eos!, a.T!, a.P!, { phase, route: "closed" }));
+        const base = { T: a.T!, P: a.P!, V: closed.V, phase: closed.phase, route: route as string };
+        const notes = notesFor(d, a.T!, a.P!, closed.phase, closed.flags, undefined, false);
+        const tail: Row = notes.length > 0 ? { notes: notes.join("; ") } : {};
+        if (route === "closed") {
+          const { Z, HR, SR, UR, GR, AR, lnphi } = closed;
+          return { ...base, Z, HR, SR, UR, GR, AR, lnphi, phi: Math.exp(lnphi), ...tail };
+        }
+        const r = guard(fn, () => maxwellResidual(d.eos!, a.T!, closed.V, { rel, shouldStop: ctx.shouldStop }));
+        return {
+          ...base, Z: r.Z, HR: r.HR, SR: r.SR, UR: r.UR, GR: r.GR, AR: r.AR, lnphi: r.lnphi, phi: Math.exp(r.lnphi),
+          AR_error: r.errors.AR, SR_error: r.errors.SR, evaluations: r.evaluations, ...tail,
+        };
       };
+      return departureRecord(d, inputs, point, ctx);
     },
   }),
   defineBuiltin({

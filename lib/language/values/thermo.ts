@@ -51,6 +51,11 @@ export interface ModelData {
   Pc: number;
   /** Range warnings of models that have them (virial, Lee-Kesler). */
   validity?(T: number, P: number): string[];
+  /**
+   * Cautions no model gives itself (lib/thermo cautions.ts: below the triple point, liquid below 0.5 Tc
+   * without triple-point data, P > 10 Pc) for a state of label `phase`; absent for if97.
+   */
+  cautions?(T: number, P: number, phase: string): readonly string[];
 }
 
 export type ThermoData = SubstanceData | MixtureData | ModelData;

@@ -22,6 +22,7 @@
 import { derivative, integrate } from "../../numerics/index.js";
 import { R } from "../constants.js";
 import { ThermoError, requirePositive } from "../errors.js";
+import { kelvin, pressureText, volumeText } from "../format.js";
 import type { EosModel, Residual } from "../eos/types.js";
 
 export interface MaxwellOptions {
@@ -65,7 +66,7 @@ export function maxwellResidual(model: EosModel, T: number, V: number, options: 
   };
   const P = pressure(T, V);
   if (!Number.isFinite(P) || P <= 0) {
-    throw new ThermoError("V", `${model.label}: P(T = ${T} K, V = ${V} m^3/mol) = ${P} Pa is not a positive pressure`);
+    throw new ThermoError("V", `${model.label}: P(T = ${kelvin(T)}, V = ${volumeText(V)}) = ${pressureText(P)} is not a positive pressure`);
   }
   const rho = 1 / V;
   // Below rCut the integrand is held at its value at rCut: P^r = P - RT rho loses digits to cancellation

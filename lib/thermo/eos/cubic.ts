@@ -15,6 +15,7 @@
 import { cubicRoots } from "../../numerics/index.js";
 import { R } from "../constants.js";
 import { ThermoError, requirePositive } from "../errors.js";
+import { kelvin, volumeText } from "../format.js";
 import { validateFluid } from "./fluid.js";
 import type { EosModel, Fluid, Residual } from "./types.js";
 
@@ -42,6 +43,8 @@ export interface CubicModel extends EosModel {
   mixture(T: number): { a: number; dadT: number; b: number };
   /** The same model and components at other mole fractions (used by the numerical component route). */
   atComposition(x: readonly number[]): CubicModel;
+  /** Co-volume b (m^3/mol): the model has no states at V <= b (P -> infinity as V -> b). */
+  coVolume(): number;
 }
 
 /** Builds a cubic model of the given family member for a fluid (pure = one component, x = [1]). */
@@ -102,7 +105,10 @@ export function cubicModel(parameters: CubicParameters, fluid: Fluid, options: {
     mixture: (T) => mix(T),
     atComposition: (xNew) => cubicModel(parameters, { ...fluid, x: [...xNew] }, { validate: false }),
 
+    coVolume: () => bmix,
+
     pressure(T: number, V: number): number {
+      if (!(V > bmix)) throw coVolumeError(parameters, fluid, T, V, bmix);
       const { a, b } = mix(T);
       return (R * T) / (V - b) - a / ((V + eps * b) * (V + sig * b));
     },
@@ -146,7 +152,7 @@ export function cubicModel(parameters: CubicParameters, fluid: Fluid, options: {
       requirePositive("P", P, "Pa");
       const sums = new Array<number>(n).fill(0);
       const { a, dadT, b } = mix(T, sums);
-      if (!(V > b)) throw new ThermoError("V", `V must exceed the co-volume b = ${b} m^3/mol; got ${V}`);
+      if (!(V > b)) throw coVolumeError(parameters, fluid, T, V, b);
       const RT = R * T;
       const Z = (P * V) / RT;
       const B = (b * P) / RT;
@@ -170,6 +176,19 @@ export function cubicModel(parameters: CubicParameters, fluid: Fluid, options: {
     },
   };
   return model;
+}
+
+/**
+ * The error for V <= b: the repulsive term RT/(V - b) diverges at the co-volume, so below it the cubic
+ * gives negative or infinite pressures that describe no state (b = OmegaB R Tc/Pc, e.g. Peng-Robinson
+ * propane 0.07780 R Tc/Pc = 56.3 cm^3/mol).
+ */
+function coVolumeError(p: CubicParameters, fluid: Fluid, T: number, V: number, b: number): ThermoError {
+  const what = fluid.components.length === 1 ? fluid.components[0]!.name : "this mixture";
+  return new ThermoError(
+    "V",
+    `V = ${volumeText(V)} is not above the co-volume of ${p.label} for ${what} at T = ${kelvin(T)}: the model has no states there; valid range V > b = ${volumeText(b)}`,
+  );
 }
 
 /** The critical point of a pure-component cubic: Vc = Zc R Tc / Pc (Tc, Pc reproduced exactly). */

@@ -14,10 +14,10 @@ export function validateFluid(fluid: Fluid): void {
   }
   let sum = 0;
   fluid.x.forEach((xi, i) => {
-    if (!Number.isFinite(xi) || xi < 0) throw new ThermoError("x", `mole fraction x[${i}] must be >= 0; got ${xi}`);
+    if (!Number.isFinite(xi) || xi < 0) throw new ThermoError("x", `mole fraction x[${i + 1}] (${fluid.components[i]?.name ?? "?"}) must be >= 0; got ${xi}`);
     sum += xi;
   });
-  if (Math.abs(sum - 1) > 1e-9) throw new ThermoError("x", `mole fractions must sum to 1; got ${sum}`);
+  if (Math.abs(sum - 1) > 1e-9) throw new ThermoError("x", `mole fractions must sum to 1; got ${Number(sum.toPrecision(6))}`);
   fluid.components.forEach((c, i) => {
     for (const [key, value] of [["Tc", c.Tc], ["Pc", c.Pc]] as const) {
       if (!Number.isFinite(value) || value <= 0) {
@@ -32,10 +32,10 @@ export function validateFluid(fluid: Fluid): void {
       throw new ThermoError("kij", `k_ij must be a ${n} x ${n} matrix`);
     }
     for (let i = 0; i < n; i++) {
-      if (k[i]![i] !== 0) throw new ThermoError("kij", `k_ij diagonal must be 0; k[${i}][${i}] = ${k[i]![i]}`);
+      if (k[i]![i] !== 0) throw new ThermoError("kij", `k_ij diagonal must be 0; k[${i + 1}, ${i + 1}] (${fluid.components[i]!.name}) = ${k[i]![i]}`);
       for (let j = 0; j < n; j++) {
         if (!Number.isFinite(k[i]![j]!) || k[i]![j] !== k[j]![i]) {
-          throw new ThermoError("kij", `k_ij must be finite and symmetric; k[${i}][${j}] = ${k[i]![j]}, k[${j}][${i}] = ${k[j]![i]}`);
+          throw new ThermoError("kij", `k_ij must be finite and symmetric; k[${i + 1}, ${j + 1}] = ${k[i]![j]} but k[${j + 1}, ${i + 1}] = ${k[j]![i]} (${fluid.components[i]!.name}/${fluid.components[j]!.name}; indices 1-based)`);
         }
       }
     }

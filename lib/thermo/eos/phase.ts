@@ -17,6 +17,7 @@
  */
 import { R } from "../constants.js";
 import { ThermoError } from "../errors.js";
+import { kelvin, pressureText } from "../format.js";
 import type { EosModel, Residual } from "./types.js";
 
 export type PhaseRequest = "stable" | "liquid" | "vapor";
@@ -84,13 +85,13 @@ export function selectRoot(model: EosModel, T: number, P: number, phase: PhaseRe
   const crit = { ...pseudoCritical(model), Vc: splitVolume(model) };
   const roots = model.volumes(T, P);
   if (roots.length === 0) {
-    throw new ThermoError("P", `${model.label}: no physical volume root (V > b) at T = ${T} K, P = ${P} Pa`);
+    throw new ThermoError("P", `${model.label}: no physical volume root (V > b) at T = ${kelvin(T)}, P = ${pressureText(P)}`);
   }
   const above = T >= crit.Tc;
   if (phase === "liquid" && above) {
     throw new ThermoError(
       "phase",
-      `"liquid" requested at T = ${T} K, at or above the critical temperature ${crit.Tc} K: no distinct liquid exists; valid: T < ${crit.Tc} K, or phase "stable"`,
+      `"liquid" requested at T = ${kelvin(T)}, at or above the critical temperature ${kelvin(crit.Tc)}: no distinct liquid exists; valid: T < ${kelvin(crit.Tc)}, or phase "stable"`,
     );
   }
   const liquid = roots[0]!;
@@ -102,12 +103,12 @@ export function selectRoot(model: EosModel, T: number, P: number, phase: PhaseRe
   let residual: Residual;
   if (phase === "liquid") {
     if (!multipleRoots && liquid >= crit.Vc && crit.Vc > 0) {
-      throw new ThermoError("phase", `"liquid" requested at T = ${T} K, P = ${P} Pa but only a vapour-like root exists (P below the liquid spinodal)`);
+      throw new ThermoError("phase", `"liquid" requested at T = ${kelvin(T)}, P = ${pressureText(P)} but only a vapour-like root exists (P below the liquid spinodal)`);
     }
     [V, residual] = [liquid, rl];
   } else if (phase === "vapor") {
     if (!multipleRoots && !above && liquid < crit.Vc) {
-      throw new ThermoError("phase", `"vapor" requested at T = ${T} K, P = ${P} Pa but only a liquid-like root exists (P above the vapour spinodal)`);
+      throw new ThermoError("phase", `"vapor" requested at T = ${kelvin(T)}, P = ${pressureText(P)} but only a liquid-like root exists (P above the vapour spinodal)`);
     }
     [V, residual] = [vapor, rv];
   } else {

@@ -13,6 +13,7 @@
  */
 import { R } from "../constants.js";
 import { ThermoError, requirePositive } from "../errors.js";
+import { kelvin, pressureText, volumeText } from "../format.js";
 import type { EosModel, Fluid, Residual } from "./types.js";
 import { pairB, pairConstants, type PairConstants, type VirialCorrelation } from "./virialCorrelations.js";
 
@@ -72,7 +73,7 @@ export function virial(fluid: Fluid, correlation: VirialCorrelation = "abbott"):
     pressure(T: number, V: number): number {
       requirePositive("V", V, "m^3/mol");
       const { B } = second(T);
-      if (V <= B) throw new ThermoError("V", `truncated virial P = RT/(V - B) needs V > B = ${B.toExponential(4)} m^3/mol; got ${V}`);
+      if (V <= B) throw new ThermoError("V", `truncated virial P = RT/(V - B) needs V > B: V = ${volumeText(V)} is not above B = ${volumeText(B)} at T = ${kelvin(T)}; valid range V > ${volumeText(Math.max(B, 0))}`);
       return (R * T) / (V - B);
     },
 
@@ -83,7 +84,7 @@ export function virial(fluid: Fluid, correlation: VirialCorrelation = "abbott"):
       if (V <= 0) {
         throw new ThermoError(
           "P",
-          `truncated virial equation has no physical volume at T = ${T} K above P = ${((R * T) / -B).toExponential(4)} Pa (Z = 1 + BP/RT <= 0); got P = ${P} Pa: use a cubic or Lee-Kesler model`,
+          `truncated virial equation has no physical volume at T = ${kelvin(T)} above P = ${pressureText((R * T) / -B)} (Z = 1 + BP/RT <= 0); got P = ${pressureText(P)}: use a cubic or Lee-Kesler model`,
         );
       }
       return [V];

@@ -12,6 +12,7 @@
  */
 import { R } from "../constants.js";
 import { ThermoError, requirePositive } from "../errors.js";
+import { kelvin, pressureText } from "../format.js";
 import { pseudoCritical, splitVolume } from "../eos/phase.js";
 import type { EosModel, Residual } from "../eos/types.js";
 import { wilsonPsat, wilsonTsat } from "./wilson.js";
@@ -40,13 +41,27 @@ function pure(model: EosModel): { Tc: number; Pc: number; Vc: number; omega: num
   return { ...pseudoCritical(model), Vc: splitVolume(model), omega: model.fluid.components[0]!.omega };
 }
 
+/**
+ * Models with a single volume root everywhere (ideal gas, truncated virial) describe no liquid, so
+ * vapour-liquid equilibrium does not exist in them: say so instead of "no convergence".
+ */
+function requireLiquidRoot(model: EosModel): void {
+  if (model.id === "idealgas" || model.id === "virial") {
+    throw new ThermoError(
+      "model",
+      `${model.label} has no liquid root, so it has no vapour-liquid equilibrium (no saturation pressure or temperature); use a model with a liquid: pr, srk, rk, vdw or lk`,
+    );
+  }
+}
+
 /** Saturation pressure (and saturated phases) at T. */
 export function psat(model: EosModel, T: number, options: SaturationOptions = {}): Saturation {
   requirePositive("T", T, "K");
   const c = pure(model);
   if (T >= c.Tc) {
-    throw new ThermoError("T", `psat: T = ${T} K is not below the critical temperature ${c.Tc} K; valid: 0 < T < ${c.Tc} K`);
+    throw new ThermoError("T", `psat: T = ${kelvin(T)} is not below the critical temperature ${kelvin(c.Tc)}; valid: 0 < T < ${kelvin(c.Tc)}`);
   }
+  requireLiquidRoot(model);
   let lo = 0;
   let hi = c.Pc;
   let lnP = Math.log(Math.min(wilsonPsat(c, T), 0.999 * c.Pc));
@@ -77,7 +92,7 @@ export function psat(model: EosModel, T: number, options: SaturationOptions = {}
     if (!inside(next)) next = lo > 0 ? 0.5 * (Math.log(lo) + Math.log(hi)) : lnP - 1;
     lnP = next;
   }
-  throw new ThermoError("T", `psat: no convergence at T = ${T} K (Tc = ${c.Tc} K) for ${model.label}`);
+  throw new ThermoError("T", `psat: no convergence at T = ${kelvin(T)} (Tc = ${kelvin(c.Tc)}) for ${model.label}`);
 }
 
 /** Saturation temperature (and saturated phases) at P. */
@@ -85,8 +100,9 @@ export function tsat(model: EosModel, P: number, options: SaturationOptions = {}
   requirePositive("P", P, "Pa");
   const c = pure(model);
   if (P >= c.Pc) {
-    throw new ThermoError("P", `tsat: P = ${P} Pa is not below the critical pressure ${c.Pc} Pa; valid: 0 < P < ${c.Pc} Pa`);
+    throw new ThermoError("P", `tsat: P = ${pressureText(P)} is not below the critical pressure ${pressureText(c.Pc)}; valid: 0 < P < ${pressureText(c.Pc)}`);
   }
+  requireLiquidRoot(model);
   const lnTarget = Math.log(P);
   let T = Math.min(wilsonTsat(c, P), c.Tc * 0.999);
   let lo = 0;
@@ -102,5 +118,5 @@ export function tsat(model: EosModel, P: number, options: SaturationOptions = {}
     if (!(next > lo && next < hi)) next = 0.5 * (lo + hi);
     T = next;
   }
-  throw new ThermoError("P", `tsat: no convergence at P = ${P} Pa (Pc = ${c.Pc} Pa) for ${model.label}`);
+  throw new ThermoError("P", `tsat: no convergence at P = ${pressureText(P)} (Pc = ${pressureText(c.Pc)}) for ${model.label}`);
 }

@@ -11,11 +11,12 @@
  *     int Cp/T dT = A ln(T/T0) + B dT + C/2 d(T^2) + D/3 d(T^3)
  * Units: T in K, Cp in J/(mol K), int Cp dT in J/mol, int Cp/T dT in J/(mol K).
  * Validity: the correlation's [Tmin, Tmax]; outside it the polynomial is extrapolated and
- * `cpWarnings` says so (values are still returned: extrapolation is the caller's informed choice).
+ * `cpWarnings` says so by the rule of cpRangeClass (flagged beyond 10 %, "far outside" beyond 50 %) (values are still returned: extrapolation is the caller's informed choice).
  * Accuracy: that of the correlation (typically 1-2 % inside its range; see each record's source).
  */
 import { R } from "../constants.js";
 import { ThermoError, requirePositive } from "../errors.js";
+import { num } from "../format.js";
 import { CP_FORM_J_CUBIC, CP_FORM_R_QUADRATIC_INVERSE } from "../substances/record.js";
 import type { Substance } from "../substances/types.js";
 
@@ -75,18 +76,41 @@ export function entropyIntegral(sub: Substance, T0: number, T: number): number {
 }
 
 /**
- * Warnings for temperatures outside the correlation's fitted range (empty when all are inside).
- * Each names the substance, the temperature and the range.
+ * Rule for flagging a Cp correlation used outside its fitted range [Tmin, Tmax] (documented here, used
+ * by every caller): a fit of this kind degrades gradually at its ends, so temperatures within 10 % of the
+ * range (0.9 Tmin to 1.1 Tmax) are not flagged (e.g. 288.15 K standard conditions with a fit from 298 K);
+ * beyond that the value is "extrapolated"; beyond 50 % (T < 0.5 Tmin or T > 1.5 Tmax) the polynomial is
+ * "far outside" its range and may even turn negative (a quadratic Cp at 10^5 K), so totals are not
+ * meaningful. The margins are common practice for polynomial fits, not a published rule.
+ */
+export const CP_MARGIN = 0.1;
+export const CP_FAR_MARGIN = 0.5;
+
+/** "far", "extrapolated" or undefined (inside the flagging margin) for T against the fit's range. */
+export function cpRangeClass(Tmin: number, Tmax: number, T: number): "far" | "extrapolated" | undefined {
+  if (T >= Tmin * (1 - CP_MARGIN) && T <= Tmax * (1 + CP_MARGIN)) return undefined;
+  return T < Tmin * (1 - CP_FAR_MARGIN) || T > Tmax * (1 + CP_FAR_MARGIN) ? "far" : "extrapolated";
+}
+
+/** The caution text for a component's Cp fit used at `cls` (no temperature in it: one text per range). */
+export function cpRangeText(name: string, Tmin: number, Tmax: number, cls: "far" | "extrapolated"): string {
+  const range = `${num(Tmin)} to ${num(Tmax)} K`;
+  return cls === "far"
+    ? `ideal-gas Cp of ${name} used far outside its fitted range ${range} (more than 50 % beyond it): the fit is not meaningful there, so H, S, U, G, A, Cp and w are unreliable`
+    : `ideal-gas Cp of ${name} extrapolated more than 10 % outside its fitted range ${range}`;
+}
+
+/**
+ * Warnings for temperatures outside the correlation's fitted range by the rule above (empty when
+ * none is flagged). Each names the substance, the temperature and the range.
  */
 export function cpWarnings(sub: Substance, ...temperatures: number[]): string[] {
   const { Tmin, Tmax } = sub.cp;
   const out: string[] = [];
   for (const T of temperatures) {
-    if (T < Tmin || T > Tmax) {
-      out.push(
-        `ideal-gas Cp of ${sub.name} extrapolated at T = ${T.toPrecision(5)} K (correlation fitted for ${Tmin} to ${Tmax} K)`,
-      );
-    }
+    const cls = cpRangeClass(Tmin, Tmax, T);
+    if (cls === "far") out.push(`${cpRangeText(sub.name, Tmin, Tmax, cls)} (T = ${num(T)} K)`);
+    else if (cls) out.push(`ideal-gas Cp of ${sub.name} extrapolated at T = ${num(T)} K (correlation fitted for ${num(Tmin)} to ${num(Tmax)} K)`);
   }
   return out;
 }

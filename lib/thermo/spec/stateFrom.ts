@@ -31,6 +31,7 @@
  */
 import { brent } from "../../numerics/index.js";
 import { ThermoError, requirePositive } from "../errors.js";
+import { energyText, entropyText, kelvin, pressureText, volumeText } from "../format.js";
 import { pseudoCritical } from "../eos/phase.js";
 import type { EosModel } from "../eos/types.js";
 import { psat } from "../equilibrium/saturation.js";
@@ -43,8 +44,11 @@ type Key = (typeof KEYS)[number];
 const UNITS: Record<Key, string> = { T: "K", P: "Pa", V: "m^3/mol", H: "J/mol", S: "J/(mol K)", U: "J/mol" };
 const GRID = 33;
 
+/** The spec in readable units (6 significant figures). */
 function fmt(spec: Spec, keys: readonly Key[]): string {
-  return keys.map((k) => `${k} = ${spec[k]} ${UNITS[k]}`).join(" and ");
+  const text = (k: Key, v: number) =>
+    k === "T" ? kelvin(v) : k === "P" ? pressureText(v) : k === "V" ? volumeText(v) : k === "S" ? entropyText(v) : energyText(v);
+  return keys.map((k) => `${k} = ${text(k, spec[k]!)}`).join(" and ");
 }
 
 /** Lower edge of a path variable: just above the co-volume b for a cubic; else 5 % of R Tc/Pc. */
@@ -284,8 +288,8 @@ export function stateFrom(model: EosModel, spec: Spec, options: StateFromOptions
   if (!result || !ok) {
     throw new ThermoError(
       k2,
-      `no ${model.label} state with ${fmt(spec, given)} for ${ctx.Tmin.toPrecision(4)} K <= T <= ${ctx.Tmax.toPrecision(4)} K` +
-        (result ? ` (closest found: T = ${result.T} K, P = ${result.P} Pa)` : ""),
+      `no ${model.label} state with ${fmt(spec, given)} for ${kelvin(ctx.Tmin)} <= T <= ${kelvin(ctx.Tmax)}` +
+        (result ? ` (closest found: T = ${kelvin(result.T)}, P = ${pressureText(result.P)})` : ""),
     );
   }
   return result;

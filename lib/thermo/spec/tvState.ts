@@ -13,6 +13,7 @@
  * cannot evaluate V (e.g. V <= b of a cubic).
  */
 import { ThermoError, requirePositive } from "../errors.js";
+import { kelvin, pressureText, volumeText } from "../format.js";
 import { pseudoCritical, selectRoot, splitVolume, type PhaseLabel } from "../eos/phase.js";
 import type { EosModel } from "../eos/types.js";
 import { psat, type Saturation } from "../equilibrium/saturation.js";
@@ -51,7 +52,7 @@ export function stateAtTV(model: EosModel, T: number, V: number, options: TVOpti
   }
   const P = pressure(T, V);
   if (!(P > 0) || !Number.isFinite(P)) {
-    throw new ThermoError("V", `${model.label}: P(T = ${T} K, V = ${V} m^3/mol) = ${P} Pa; a state needs P > 0`);
+    throw new ThermoError("V", `${model.label}: P(T = ${kelvin(T)}, V = ${volumeText(V)}) = ${pressureText(P)}; a state needs P > 0`);
   }
   const s = state(model, T, P, { idealGas: ig });
   if (Math.abs(s.V - V) <= 1e-9 * V) return s;

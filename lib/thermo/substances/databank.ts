@@ -10,8 +10,16 @@ import { ALKANES } from "./alkanes.js";
 import { GASES } from "./gases.js";
 import { POLAR } from "./polar.js";
 import { REFRIGERANTS } from "./refrigerants.js";
+import { TRIPLE_POINTS } from "./triplePoints.js";
 import type { Substance } from "./types.js";
 import { UNSATURATED } from "./unsaturated.js";
+
+/** A record with its triple point (triplePoints.ts) where one is known. */
+function withTriple(s: Substance): Substance {
+  const t = TRIPLE_POINTS[s.id];
+  if (!t) return s;
+  return { ...s, Tt: t.Tt, ...(t.Pt !== undefined ? { Pt: t.Pt } : {}), tripleSource: t.source };
+}
 
 /** Every built-in record, grouped by family in the order listed. */
 export const SUBSTANCES: readonly Substance[] = Object.freeze([
@@ -20,7 +28,7 @@ export const SUBSTANCES: readonly Substance[] = Object.freeze([
   ...GASES,
   ...POLAR,
   ...REFRIGERANTS,
-]);
+].map(withTriple));
 
 /** The matching key of a name: lower case without spaces, hyphens, underscores, commas or dots. */
 export function normalizeName(name: string): string {

@@ -33,6 +33,14 @@ export interface Substance {
   cp: CpCorrelation;
   /** Where the constants come from: book, table, edition; "(from memory)" where recalled. */
   source: string;
+  /**
+   * Triple point, K and Pa (Pt may be unknown): below Tt the stable condensed phase is a solid, so an
+   * equation-of-state liquid there is an extrapolation and psat/tsat do not apply. Absent = unknown.
+   */
+  Tt?: number;
+  Pt?: number;
+  /** Where Tt and Pt come from. */
+  tripleSource?: string;
   /** True for a user-defined pseudo-component. */
   user?: boolean;
   /** Caveats for the user, e.g. "Tb is the sublimation point" or how defaults were filled. */

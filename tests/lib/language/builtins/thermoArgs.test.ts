@@ -33,6 +33,9 @@ describe("requireAbove0", () => {
     expect(() => requireAbove0("state", "T", -1, "K")).toThrow(/argument T of state\(\) must be above 0 K \(absolute temperature\), got -1 K/);
     expect(() => requireAllAbove0("state", "P", Float64Array.of(1, 0), "Pa")).toThrow(/argument P\[2\] of state\(\)/);
     expect(() => requireAbove0("state", "T", 1, "K")).not.toThrow();
+    // Readable numbers, no raw floats or SI (QA issue 5, item 19): 8e6 Pa reads as bar, Infinity is named.
+    expect(() => requireAbove0("state", "T", Infinity, "K")).toThrow(/must be above 0 K \(absolute temperature\) and finite, got Infinity$/);
+    expect(() => requireAbove0("state", "P", -8e6, "Pa")).toThrow(/got -80 bar$/);
   });
 });
 

@@ -18,7 +18,11 @@ describe("idealGasPart", () => {
     expect(Math.abs(part.H(298.15))).toBeLessThan(1e-9);
     expect(Math.abs(part.S(298.15, 1e5))).toBeLessThan(1e-12);
     expect(part.warnings(400)).toEqual([]);
-    expect(part.warnings(3000)[0]).toMatch(/extrapolated outside its fitted range/);
+    // Propane's Table C.1 fit: 298 to 1500 K. Rule (cp.ts, common practice): flag beyond 10 %, "far" beyond 50 %.
+    expect(part.warnings(3000)[0]).toMatch(/Propane used far outside its fitted range 298 to 1500 K/);
+    expect(part.warnings(1600)).toEqual([]);
+    expect(part.warnings(288.15)).toEqual([]);
+    expect(part.warnings(1700)[0]).toMatch(/extrapolated more than 10 % outside its fitted range 298 to 1500 K/);
   });
   it("idealGasPart names the component without Cp", () => {
     const cut = pseudoComponent({ name: "cut", Tc: 540, Pc: 27e5, omega: 0.35, M: 0.1 });

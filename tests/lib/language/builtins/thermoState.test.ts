@@ -248,3 +248,52 @@ describe("change", () => {
     expect(isQuantityColumn(c.dT) && Array.from(c.dT.si).map((x) => Math.round(x * 1e9) / 1e9)).toEqual([10, 10, 10, 10]);
   });
 });
+
+describe("QA issue 5 fixes in state() and departure()", () => {
+  it("departure() names the model and carries state()'s cautions (item 4: virial methane at 500 bar)", () => {
+    const d = value('departure(virial("methane"), 300 K, 500 bar)') as Record<string, unknown>;
+    expect(d.model).toMatch(/truncated virial .*; methane/);
+    // The truncated virial range rule Tr > 0.686 + 0.439 Pr (SVNA 7th ed. Fig. 3.14): methane Tr = 1.57 here.
+    expect(d.notes).toMatch(/truncated virial used beyond its range/);
+    // Methane Pc = 45.99 bar (SVNA Table B.1): 500 bar > 10 Pc (cautions.ts rule 3, common practice).
+    expect(d.notes).toMatch(/more than 10 Pc/);
+    const ok = value('departure(pr("methane"), 300 K, 50 bar)') as Record<string, unknown>;
+    expect(ok.notes).toBeUndefined();
+    expect(ok.model).toMatch(/^Peng-Robinson/);
+  });
+  it("departure() over a span gives columns, the model once and each caution once with its count", () => {
+    const d = value('departure(virial("methane"), 300 K, span(10 bar, 400 bar, 5))') as Record<string, unknown>;
+    expect(isQuantityColumn(d.HR)).toBe(true);
+    expect(typeof d.model).toBe("string");
+    expect(d.notes).toMatch(/truncated virial used beyond its range.*\(4 of 5 points, first shown\)/);
+  });
+  it("departure() and state() take the phase as text or as a record (item 23)", () => {
+    // n-butane at 350 K, 9.4573 bar: both roots exist (SVNA 7th ed. Example 3.9, from memory).
+    const a = num('departure(b, 350 K, 9.4573 bar, "liquid").HR', "J/mol");
+    const c = num('departure(b, 350 K, 9.4573 bar, {phase: "liquid"}).HR', "J/mol");
+    expect(c).toBe(a);
+    expect(num('state(b, 350 K, 9.4573 bar, {phase: "liquid"}).V', "cm^3/mol")).toBe(num('state(b, 350 K, 9.4573 bar, "liquid").V', "cm^3/mol"));
+    expect(rel(num('state(b, 350 K, 9.4573 bar, {phase: "liquid"}).V', "cm^3/mol"), 112.6)).toBeLessThan(1e-3);
+    expect(errorOf('departure(b, 350 K, 9.4573 bar, {phase: "liquid", rute: "integrate"})')).toMatch(/option "rute" of departure\(\) is not known; valid options: phase, route, rel/);
+  });
+  it("state() of an equation-of-state liquid below the triple point carries a visible caution (item 5)", () => {
+    // CO2 triple point 216.592 K (Span & Wagner 1996, from memory): at 200 K, 10 bar the cubic's root is liquid.
+    expect(value('state(pr("CO2"), 200 K, 10 bar).phase')).toBe("liquid");
+    expect(value('state(pr("CO2"), 200 K, 10 bar).notes')).toMatch(/below the triple point of Carbon dioxide .*the stable phase is solid; the equation-of-state liquid is an extrapolation/);
+    // Water at 250 K, 1 bar: below 273.16 K (IAPWS).
+    expect(value('state(pr("water"), 250 K, 1 bar).notes')).toMatch(/below the triple point of Water/);
+    // The vectorised fast path gives the same caution with its count.
+    expect(value('state(pr("CO2"), span(200 K, 240 K, 3), 10 bar).notes')).toMatch(/below the triple point of Carbon dioxide.*\(1 of 3 points/);
+    // A pseudo-component without triple-point data: the 0.5 Tc rule (cautions.ts rule 2).
+    expect(value('state(pr(substance({name: "cut", Tc: 540 K, Pc: 27 bar, omega: 0.35, M: 100 g/mol})), 250 K, 1 bar).notes')).toMatch(/T < 0\.5 Tc .* no triple-point data/);
+  });
+  it("state() flags absurd inputs (item 7) and keeps standard conditions quiet", () => {
+    // Methane Pc = 45.99 bar (SVNA Table B.1): 1e6 bar is 20,000 Pc.
+    expect(value('state(pr("methane"), 300 K, 1e6 bar).notes')).toMatch(/P = 100000 MPa is more than 10 Pc \(Pc = 45\.99 bar\): far outside the range where this model is meaningful/);
+    // Methane Cp fit 298-1500 K (SVNA Table C.1): 1e5 K is far outside it, where its quadratic turns negative.
+    expect(value('state(pr("methane"), 1e5 K, 1 bar).notes')).toMatch(/Cp of Methane used far outside its fitted range 298 to 1500 K .*not meaningful/);
+    // 288.15 K (15 degC standard conditions) lies within 10 % of the fit's 298 K start: no Cp note.
+    expect((value('state(pr("methane"), 288.15 K, 1 bar)') as Record<string, unknown>).notes).toBeUndefined();
+    expect(value('state(pr("methane"), 200 K, 1 bar).notes')).toMatch(/extrapolated more than 10 % outside its fitted range/);
+  });
+});

@@ -57,6 +57,12 @@ describe("cpWarnings", () => {
     expect(cpWarnings(s, 400, 1000)).toEqual([]);
     const w = cpWarnings(s, 200, 400, 1800);
     expect(w).toHaveLength(2);
-    expect(w[0]).toMatch(/Methane extrapolated at T = 200.00 K \(correlation fitted for 298 to 1500 K\)/);
+    expect(w[0]).toMatch(/Methane extrapolated at T = 200 K \(correlation fitted for 298 to 1500 K\)/);
+    // Rule of cpRangeClass (common practice, documented in cp.ts): within 10 % of the range is not flagged
+    // (288.15 K standard conditions with a fit from 298 K; 1.1 x 1500 K = 1650 K); beyond 50 % is "far".
+    expect(cpWarnings(s, 288.15, 269, 1650)).toEqual([]);
+    expect(cpWarnings(s, 268)).toHaveLength(1);
+    expect(cpWarnings(s, 1e5)[0]).toMatch(/Methane used far outside its fitted range 298 to 1500 K .*not meaningful.*\(T = 100000 K\)/);
+    expect(cpWarnings(s, 2250)[0]).toMatch(/extrapolated at T = 2250 K/);
   });
 });
