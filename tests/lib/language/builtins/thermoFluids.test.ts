@@ -50,3 +50,36 @@ describe("resolveSubstance", () => {
     expect(thermoDataOf(value("pr(sx)"))?.kind).toBe("model");
   });
 });
+
+describe("mixtureValue (QA issue 5: kij forms, validation, pseudo-components)", () => {
+  const errorOf = (code: string): string => {
+    const r = session.run(code, sink);
+    return r.ok ? "" : r.error.evalue;
+  };
+  it("mixtureValue: a kij record that names no pair is an error naming argument kij and the accepted forms (item 15)", () => {
+    const e = errorOf("mixture({methane: 0.5, CO2: 0.5}, {ki: 0.1})");
+    expect(e).toMatch(/^argument kij of mixture\(\): key "ki" must name two different components .*accepted forms: a record of pairs \{"methane\/carbon dioxide": 0\.1\}.*symmetric n x n matrix/);
+    expect(e).not.toMatch(/argument name|Did you mean/);
+    // The option-record form {kij: ...} is accepted around either form.
+    const d = thermoDataOf(value('mixture({methane: 0.5, CO2: 0.5}, {kij: {"methane/CO2": 0.1}})'));
+    if (d?.kind !== "mixture") throw new Error("not a mixture");
+    expect(d.kij).toEqual([[0, 0.1], [0.1, 0]]);
+    expect(errorOf("mixture({methane: 0.5, CO2: 0.5}, {kij: 0.1})")).toMatch(/^argument kij of mixture\(\) needs a record of pairs/);
+  });
+  it("mixtureValue: an asymmetric kij or a non-zero diagonal is rejected at mixture() with 1-based indices and names (item 16)", () => {
+    expect(errorOf("mixture({methane: 0.5, CO2: 0.5}, [0, 0.1; 0.2, 0])")).toMatch(/argument kij of mixture\(\) must be symmetric: kij\[1, 2\] = 0\.1 but kij\[2, 1\] = 0\.2 \(methane\/carbon dioxide\)/);
+    expect(errorOf("mixture({methane: 0.5, CO2: 0.5}, [0.1, 0.1; 0.1, 0])")).toMatch(/the diagonal must be 0 .*kij\[1, 1\] \(methane\) = 0\.1/);
+  });
+  it("mixtureValue: user pseudo-components take part through the pair-list form (P4: a C7+ cut)", () => {
+    session.run('cut = substance({name: "C7+", Tc: 540 K, Pc: 27 bar, omega: 0.35, M: 100 g/mol, cp: 200 J/(mol K)});', sink);
+    const d = thermoDataOf(value('mixture([["methane", 0.8], [cut, 0.2]], {"methane/C7+": 0.04})'));
+    if (d?.kind !== "mixture") throw new Error("not a mixture");
+    expect(d.components.map((c) => c.name)).toEqual(["Methane", "C7+"]);
+    expect(d.x).toEqual([0.8, 0.2]);
+    expect(d.kij).toEqual([[0, 0.04], [0.04, 0]]);
+    // Kay's rule Tpc = 0.8 * 190.6 + 0.2 * 540 = 260.48 K (methane Tc from SVNA Table B.1).
+    expect((value('pr(mixture([["methane", 0.8], [cut, 0.2]]))') as { Tc: { toNumber(u: string): number } }).Tc.toNumber("K")).toBeCloseTo(260.48, 6);
+    // A substance value inside the record form is pointed to the pair form.
+    expect(errorOf("mixture({methane: 0.8, c7: cut})")).toMatch(/give a substance\(\.\.\.\) with its fraction as a pair, like mixture\(\[\["methane", 0\.8\], \[c7, 0\.2\]\]\)/);
+  });
+});
