@@ -26,6 +26,7 @@ import { inspectAt } from "./inspect.js";
 import { isCompleteCell } from "./isComplete.js";
 import { answerHelp, helpTarget } from "./helpQuery.js";
 import { rejectAssignments } from "./expression.js";
+import { normalizeSymbols, placeOnOriginal } from "./symbols.js";
 import { constantValues } from "./constants.js";
 import type { CellSink, RunResult, Session, SessionOptions } from "./session.js";
 
@@ -158,7 +159,10 @@ export function createSessionWithInternals(
   const inspect = (code: string, cursorPos: number, detail: 0 | 1) => inspectAt(internals, code, cursorPos, detail);
 
   /** Runs a cell against `target` (the session's scope, or a copy for evaluateExpression). */
-  const run = (code: string, cellSink: CellSink, target: Map<string, unknown> = scope): RunResult => {
+  const run = (source: string, cellSink: CellSink, target: Map<string, unknown> = scope): RunResult => {
+    // °C, ×, ÷ ... rewritten (symbols.ts); errors are placed back on the source as written.
+    const norm = normalizeSymbols(source);
+    const code = norm.code;
     const help = helpTarget(code);
     if (help !== undefined) {
       const answer = answerHelp(help, inspect, knownNames);
@@ -214,7 +218,7 @@ export function createSessionWithInternals(
     } catch (err) {
       flush();
       const le = err instanceof LanguageError ? err : translateError(err, code, 0, code, knownNames);
-      return { ok: false, error: le.toCellError() };
+      return { ok: false, error: placeOnOriginal(le, norm, source).toCellError() };
     } finally {
       flushPending = () => {};
       sink = SILENT_SINK;
@@ -226,16 +230,16 @@ export function createSessionWithInternals(
     run,
     evaluateExpression: (expression) => {
       try {
-        rejectAssignments(expression, parse);
+        rejectAssignments(normalizeSymbols(expression).code, parse);
       } catch (err) {
-        if (err instanceof LanguageError) return { ok: false, error: err.toCellError() };
+        if (err instanceof LanguageError) return { ok: false, error: placeOnOriginal(err, normalizeSymbols(expression), expression).toCellError() };
         throw err;
       }
       return run(expression, SILENT_SINK, new Map(scope));
     },
     complete: (code, cursorPos) => completeAt(internals, code, cursorPos),
     inspect,
-    isComplete: (code) => isCompleteCell(code, parse),
+    isComplete: (code) => isCompleteCell(normalizeSymbols(code).code, parse),
   };
   return { session, internals };
 }

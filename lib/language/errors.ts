@@ -5,6 +5,7 @@
 import type { CellError } from "./session.js";
 import { positionOf } from "./statements.js";
 import { suggestNames } from "./suggest.js";
+import { arityMessage, wrongTypeMessage } from "./typeErrors.js";
 
 export class LanguageError extends Error {
   override name = "LanguageError";
@@ -81,7 +82,12 @@ function explain(err: unknown, text: string, names: NameSource): Located {
   }
   m = /^Unexpected type of argument in function (\w+) \(expected: ([^,]+), actual: ([^,]+), index: (\d+)\)/.exec(message);
   if (m) {
-    return { kind: "TypeError", message: `${m[1]}(): argument ${Number(m[4]) + 1} has the wrong type (expected ${m[2]}, got ${m[3]})`, offset: findWord(text, m[1]!) };
+    return { kind: "TypeError", message: wrongTypeMessage(m[1]!, m[2]!, m[3]!, Number(m[4])), offset: findWord(text, m[1]!) };
+  }
+  const arity = arityMessage(message, text);
+  if (arity !== undefined) {
+    const fn = /function (\S+)/.exec(message)![1]!;
+    return { kind: "TypeError", message: arity, offset: findWord(text, fn), width: Array.from(fn).length };
   }
   m = /^(?:No access to (?:property|method)|Cannot access method) "([^"]+)"/.exec(message);
   if (m) {
@@ -99,7 +105,7 @@ function explain(err: unknown, text: string, names: NameSource): Located {
     return { kind: e?.name === "ArgumentError" ? "ArgumentError" : "Error", message, offset: at, width: call >= 0 ? 5 : 1 };
   }
   m = /^(?:argument \S+ of |)(\w+)\(\)/.exec(message) ?? /of (\w+)\(\)/.exec(message);
-  const kind = e?.name === "UnitsError" ? "UnitsError" : e?.name === "ArgumentError" ? "ArgumentError" : e?.name === "Interrupted" ? "Interrupted" : "Error";
+  const kind = e?.name === "UnitsError" ? ((e as { code?: string }).code === "not_a_quantity" ? "TypeError" : "UnitsError") : e?.name === "ArgumentError" ? "ArgumentError" : e?.name === "Interrupted" ? "Interrupted" : "Error";
   return { kind, message, offset: m ? findWord(text, m[1]!) : undefined, width: m ? Array.from(m[1]!).length : undefined };
 }
 

@@ -6,6 +6,7 @@
  */
 import type { MathJsInstance, Matrix, Unit } from "mathjs";
 import { UnitsError } from "./errors.js";
+import { isMathjsMismatch, isOpaque, opaqueOperand, operandMismatch } from "./mismatch.js";
 import { absoluteOf, checkPower, comparable, isOffsetQuantity, isUnitValue, productOperands, sumOperands } from "./offset.js";
 
 type Binary = (a: unknown, b: unknown) => unknown;
@@ -92,12 +93,24 @@ export function installOffsetPolicy(math: MathJsInstance): void {
     return orig[name]!(a, b);
   };
 
-  const compareLike = (name: string): Binary => (a, b) =>
+  const COMPARISON: Record<string, string> = { compare: "compare", equal: "==", unequal: "!=", larger: ">", largerEq: ">=", smaller: "<", smallerEq: "<=" };
+  // A dimension mismatch between two single quantities names both (mismatch.ts); arrays keep mathjs's words.
+  const named = (op: string, f: Binary): Binary => (a, b) => {
+    try {
+      return f(a, b);
+    } catch (err) {
+      if (isMathjsMismatch(err) && !isCollection(a) && !isCollection(b)) throw operandMismatch(op, a, b);
+      // A record, model or function as an operand: mathjs would list its internal signatures.
+      if (!(err instanceof UnitsError) && (isOpaque(a) || isOpaque(b))) throw opaqueOperand(op, a, b);
+      throw err;
+    }
+  };
+  const compareLike = (name: string): Binary => named(COMPARISON[name] ?? name, (a, b) =>
     containsOffset(a) || containsOffset(b)
       ? isCollection(a) || isCollection(b)
         ? elementwise(math, (x, y) => orig[name]!(comparable(math, x), comparable(math, y)), a, b)
         : orig[name]!(comparable(math, a), comparable(math, b))
-      : orig[name]!(a, b);
+      : orig[name]!(a, b));
 
   const binary = (name: string, f: Binary) =>
     math.typed(name, {
@@ -133,13 +146,13 @@ export function installOffsetPolicy(math: MathJsInstance): void {
       any: (x: unknown) => orig.cbrt!(own(x)),
       "any, boolean": (x: unknown, all: boolean) => orig.cbrt!(own(x), all),
     }),
-    add: binary("add", sumLike("add")),
-    subtract: math.typed("subtract", { "any, any": sumLike("subtract") }),
-    multiply: binary("multiply", productLike("multiply", "multiply", false)),
-    divide: math.typed("divide", { "any, any": productLike("divide", "divide", false) }),
+    add: binary("add", named("+", sumLike("add"))),
+    subtract: math.typed("subtract", { "any, any": named("-", sumLike("subtract")) }),
+    multiply: binary("multiply", named("*", productLike("multiply", "multiply", false))),
+    divide: math.typed("divide", { "any, any": named("/", productLike("divide", "divide", false)) }),
     dotMultiply: math.typed("dotMultiply", { "any, any": productLike("dotMultiply", "multiply", true) }),
     dotDivide: math.typed("dotDivide", { "any, any": productLike("dotDivide", "divide", true) }),
-    pow: math.typed("pow", { "any, any": powLike("pow") }),
+    pow: math.typed("pow", { "any, any": named("^", powLike("pow")) }),
     dotPow: math.typed("dotPow", { "any, any": powLike("dotPow") }),
     sum: math.typed("sum", { "...any": (args: unknown[]) => sum(...args) }),
     mean: math.typed("mean", { "...any": (args: unknown[]) => mean(...args) }),

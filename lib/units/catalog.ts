@@ -68,9 +68,16 @@ export const ADDED_UNITS: readonly AddedUnit[] = [
   { name: "Sm3", definition: `${molesPerM3(ATM_PA, 288.15)} mol`, help: "standard cubic metre as an AMOUNT of gas: ideal gas at 15 degC and 101.325 kPa (42.29 mol)", source: "ISO 13443:1996 standard reference conditions" },
   { name: "Nm3", definition: `${molesPerM3(ATM_PA, 273.15)} mol`, help: "normal cubic metre as an AMOUNT of gas: ideal gas at 0 degC and 101.325 kPa (44.62 mol)", source: "DIN 1343 normal conditions" },
   { name: "scf", definition: `${molesPerM3(SCF_P, SCF_T) * FT3} mol`, help: "standard cubic foot as an AMOUNT of gas: ideal gas at 60 degF and 14.696 psia (1.1953 mol; 379.5 scf per lbmol)", source: "GPA 2172 / US gas-industry standard conditions 60 degF, 14.696 psia" },
-  { name: "Mscf", definition: `${1e3 * molesPerM3(SCF_P, SCF_T) * FT3} mol`, help: "one thousand scf (M = thousand, gas-industry usage)", source: "as scf" },
-  { name: "MMscf", definition: `${1e6 * molesPerM3(SCF_P, SCF_T) * FT3} mol`, help: "one million scf", source: "as scf" },
-  { name: "MMscfd", definition: `${(1e6 * molesPerM3(SCF_P, SCF_T) * FT3) / 86400} mol/s`, aliases: ["MMSCFD"], help: "million standard cubic feet per day, a MOLAR flow (60 degF, 14.696 psia)", source: "as scf" },
+  { name: "Mscf", definition: `${1e3 * molesPerM3(SCF_P, SCF_T) * FT3} mol`, aliases: ["mscf", "MSCF"], help: "one thousand scf (M = thousand, gas-industry usage)", source: "as scf" },
+  { name: "MMscf", definition: `${1e6 * molesPerM3(SCF_P, SCF_T) * FT3} mol`, aliases: ["mmscf", "MMSCF"], help: "one million scf", source: "as scf" },
+  { name: "MMscfd", definition: `${(1e6 * molesPerM3(SCF_P, SCF_T) * FT3) / 86400} mol/s`, aliases: ["MMSCFD", "mmscfd"], help: "million standard cubic feet per day, a MOLAR flow (60 degF, 14.696 psia)", source: "as scf" },
+  { name: "Mscfd", definition: `${(1e3 * molesPerM3(SCF_P, SCF_T) * FT3) / 86400} mol/s`, aliases: ["MSCFD", "mscfd"], help: "thousand standard cubic feet per day, a MOLAR flow (60 degF, 14.696 psia)", source: "as scf" },
+  // Time: the day as `d` (Sm3/d, bbl/d on datasheets); mathjs has `day` only. No prefixes, so no
+  // kd or md; a variable named d still wins over the unit, as for every unit name.
+  { name: "d", definition: "86400 s", help: "day, 86400 s (as in Sm3/d, bbl/d)", source: "NIST SP 811 (2008) table 6: day = 86 400 s" },
+  // Volumes: US and imperial gallons by name (mathjs's gal is the US gallon).
+  { name: "USgal", definition: "3.785411784e-3 m^3", help: "US liquid gallon, 3.785411784 L (same as gal)", source: "NIST SP 811 B.8: gallon (US) = 3.785412e-3 m^3 (exact 231 in^3)" },
+  { name: "UKgal", definition: "4.54609e-3 m^3", aliases: ["impgal"], help: "imperial (UK) gallon, 4.54609 L", source: "UK Weights and Measures Act 1985: gallon = 4.54609 dm^3" },
   // Transport and flow units seen on datasheets.
   { name: "cP", definition: "1e-3 Pa s", help: "centipoise, 1 mPa s", source: "NIST SP 811 B.8" },
   { name: "cSt", definition: "1e-6 m^2/s", help: "centistokes, 1 mm^2/s", source: "NIST SP 811 B.8" },

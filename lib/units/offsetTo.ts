@@ -11,6 +11,7 @@
  * display units, verify) goes through Unit.prototype.to, so the fix is made there, once, on the
  * instance's own Unit class (each mathjs instance has its own; sessions never share it).
  */
+import { conversionMismatch, isMathjsMismatch } from "./mismatch.js";
 import type { MathJsInstance, Unit } from "mathjs";
 
 interface UnitInternals {
@@ -40,7 +41,14 @@ export function installOffsetConversion(math: MathJsInstance): void {
   if (UnitClass[INSTALLED]) return;
   const original = UnitClass.prototype.to;
   UnitClass.prototype.to = function to(this: Unit, target: string | Unit): Unit {
-    const result = original.call(this, target);
+    let result: Unit;
+    try {
+      result = original.call(this, target);
+    } catch (err) {
+      // mathjs: "Units do not match ('m^3' != '1 Sm3')"; say what each side is instead.
+      if (isMathjsMismatch(err)) throw conversionMismatch(this, target);
+      throw err;
+    }
     const self = this as unknown as UnitInternals;
     // mathjs handled it: valueless, or a single (non-derived) unit, whose offset it applies itself.
     if (self.value === null || !(self._isDerived() || self.units.length === 0)) return result;

@@ -21,7 +21,7 @@ describe("translateError", () => {
     const r = new RangeError("Maximum call stack size exceeded");
     expect(translateError(r, "f(1)", 0, "f(1)", () => []).message).toMatch(/calls itself/);
     const t = new TypeError("Unexpected type of argument in function sqrt (expected: number, actual: string, index: 0)");
-    expect(translateError(t, 'sqrt("a")', 0, 'sqrt("a")', () => []).message).toBe("sqrt(): argument 1 has the wrong type (expected number, got string)");
+    expect(translateError(t, 'sqrt("a")', 0, 'sqrt("a")', () => []).message).toBe("sqrt() cannot take text as argument 1: it works on numbers");
   });
   it("translateError keeps units errors and places them at the named function", () => {
     const e = Object.assign(new Error("argument T of psat() needs a temperature, got 3 bar (a pressure)"), { name: "UnitsError" });

@@ -28,8 +28,26 @@ const ROWS: Row[] = [
   { cell: "25 degC + 25 degC", error: /.+/ },
   { cell: "span(1 bar, 300 K, 3)", error: /same dimension/ },
   { cell: "logspan(1 bar, 100 bar, 3 K)", error: /argument n of logspan\(\).*got 3 K \(a temperature\)/ },
-  { cell: "1 m + 1 s", error: /units do not match/ },
+  { cell: "1 m + 1 s", error: /cannot add 1 m \(a length\) and 1 s \(a time\): both sides of \+ and - must have the same dimension/ },
   { cell: "x = 3 barr", error: /unknown name "barr"; did you mean "bar"/ },
+  // Symbols typed or pasted from datasheets (symbols.ts).
+  { cell: "25 °C to K", value: ["K", 298.15, 1e-12, "SI Brochure 9th ed. 2.3.1: T/K = t/degC + 273.15"] },
+  { cell: "25 ℃ to K", value: ["K", 298.15, 1e-12, "SI Brochure 9th ed. 2.3.1"] },
+  { cell: "77 °F to degC", value: ["degC", 25, 1e-12, "NIST SP 811 B.8: t/degC = (t/degF - 32)/1.8"] },
+  { cell: "5 × 3", value: ["", 15, 0, "arithmetic"] },
+  { cell: "10 ÷ 2", value: ["", 5, 0, "arithmetic"] },
+  { cell: "8.314462618 J/(mol·K) * 300 K to J/mol", value: ["J/mol", 2494.3387854, 1e-9, "8.314462618 x 300 (CODATA 2018 R)"] },
+  // Units added for datasheets (lib/units catalog.ts).
+  { cell: "1e6 Sm3/d to mol/s", value: ["mol/s", 489.497029860, 1e-9, "101325 Pa/(R 288.15 K) x 1e6 / 86400 s (ISO 13443 conditions, python3)"] },
+  { cell: "1 USgal to L", value: ["L", 3.785411784, 1e-12, "NIST SP 811 B.8: US gallon = 231 in^3 = 3.785411784 L"] },
+  { cell: "1 mmscfd to MMscfd", value: ["MMscfd", 1, 1e-12, "alias (gas-industry usage, common practice)"] },
+  { cell: "1 mscf to scf", value: ["scf", 1000, 1e-12, "M = thousand in gas-industry usage (common practice)"] },
+  // Dimension mismatches and mathjs internals in the user's terms.
+  { cell: "1 Sm3 to m^3", error: /cannot convert 1 Sm3 \(an amount of substance\) to m\^3 \(a volume\).*Sm3 is an amount of substance, not a volume.*15 degC and 101\.325 kPa.*R \* T \/ P/ },
+  { cell: 'pr("methane")*2', error: /cannot use a model in \*: \* works on numbers, quantities and arrays/ },
+  { cell: "sqrt(-1 bar^2)", error: /complex number/ },
+  { cell: "1 bar > 1 K", error: /cannot compare \(>\) 1 bar \(a pressure\) and 1 K \(a temperature\)/ },
+  { cell: "integrate(f(x, y) = x*y, 0, 1)", error: /f needs more arguments than it was given: it got 1 \(argument 2 is missing\); integrate\(\) calls it with one argument/ },
 ];
 
 describe("unit traps in cells", () => {

@@ -46,4 +46,19 @@ describe("ADDED_UNITS", () => {
     expect(math.unit(0, "kPag").toNumber("kPa")).toBeCloseTo(101.325, 12);
     expect(math.unit(0, "MPag").toNumber("MPa")).toBeCloseTo(0.101325, 12);
   });
+  it("ADDED_UNITS: day as d (Sm3/d), US and UK gallons, lower-case standard-volume aliases", () => {
+    const math = mathWithUnits();
+    expect(math.unit(1, "d").toNumber("h")).toBe(24); // NIST SP 811 table 6: d = 86 400 s
+    expect(math.unit(1, "USgal").toNumber("L")).toBeCloseTo(3.785411784, 12); // NIST SP 811 B.8 (231 in^3, exact)
+    expect(math.unit(1, "USgal").toNumber("gal")).toBeCloseTo(1, 12); // mathjs gal is the US gallon
+    expect(math.unit(1, "UKgal").toNumber("L")).toBeCloseTo(4.54609, 12); // UK Weights and Measures Act 1985
+    expect(math.unit(1, "mmscfd").toNumber("MMscfd")).toBeCloseTo(1, 12);
+    expect(math.unit(1, "mscf").toNumber("scf")).toBeCloseTo(1000, 9); // M = thousand (gas-industry usage, common practice)
+    expect(math.unit(1, "mmscf").toNumber("scf")).toBeCloseTo(1e6, 6);
+    expect(math.unit(1, "Mscfd").toNumber("MMscfd")).toBeCloseTo(1e-3, 15);
+    // 1e6 Sm3/d = 1e6 x 101325/(R x 288.15) / 86400 mol/s = 489.497 mol/s (python3, CODATA R, ISO 13443)
+    expect(math.evaluate("1e6 Sm3/d").toNumber("mol/s")).toBeCloseTo(489.49702986, 6);
+    // d has no prefixes: dm stays the decimetre.
+    expect(math.unit(1, "dm").toNumber("m")).toBeCloseTo(0.1, 15);
+  });
 });

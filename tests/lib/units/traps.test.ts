@@ -69,7 +69,7 @@ const rows: Row[] = [
   { expr: "1 lbmol", unit: "kmol", value: 0.45359237, source: "lb = 0.45359237 kg exactly (1959 international pound)" },
   { expr: "1 lbm", unit: "kg", value: 0.45359237, source: "1959 international pound" },
   { expr: "1 lbf", unit: "N", value: 4.4482216152605, source: "scipy.constants pound_force" },
-  { expr: "1 lbm + 1 lbf", error: /Units do not match/, source: "mass and force are different dimensions" },
+  { expr: "1 lbm + 1 lbf", error: /cannot add 1 lbm \(a mass\) and 1 lbf \(a force\)/, source: "mass and force are different dimensions" },
   // Energies.
   { expr: "1 Btu", unit: "kJ", value: 1.05505585262, source: "scipy.constants Btu (IT)" },
   { expr: "1 kcal", unit: "kJ", value: 4.184, source: "scipy.constants calorie_th" },
