@@ -34,7 +34,7 @@ export { maxwellResidual, type MaxwellOptions, type MaxwellResidual } from "./de
 export { internalPressure } from "./departure/internalPressure.js";
 export { psat, tsat, type Saturation } from "./equilibrium/saturation.js";
 export { wilsonPsat, wilsonTsat } from "./equilibrium/wilson.js";
-export { state, change, type ThermoState, type StateOptions, type IdealGasFunctions, type Spec, type StateChange } from "./state.js";
+export { state, change, twoPhase, type ThermoState, type StateOptions, type IdealGasFunctions, type Spec, type StateChange } from "./state.js";
 export { stateFrom } from "./spec/stateFrom.js";
 export { heatCapacity, type HeatCapacities } from "./departure/heatCapacity.js";
 export { getSubstance, suggestSubstances, listSubstances, normalizeName } from "./substances/databank.js";

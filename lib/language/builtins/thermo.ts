@@ -11,6 +11,27 @@ import { MODEL_IDS, modelValue, type ModelId } from "./thermoModels.js";
 import { thermoProps } from "./thermoProps.js";
 import { thermoState } from "./thermoState.js";
 
+type UnitLike = { formatUnits(): string; to(u: string): unknown };
+const isUnitLike = (v: unknown): v is UnitLike =>
+  typeof v === "object" && v !== null && (v as { isUnit?: boolean }).isUnit === true;
+
+/**
+ * per_mass's result in the units engineers read: the per-mole quantity's own units with the amount
+ * (mol, kmol; lbmol -> lb) replaced by the matching mass (kJ/mol -> kJ/kg, J/(mol K) -> J/(kg K)), where
+ * that conversion exists; otherwise the result as simplified.
+ */
+function perKilogram(result: unknown, x: unknown): unknown {
+  if (!isUnitLike(result) || !isUnitLike(x)) return result;
+  const units = x.formatUnits();
+  if (!/\b(k?mol)\b|\blbmol\b/.test(units)) return result;
+  const target = units.replace(/\blbmol\b/g, "lb").replace(/\bk?mol\b/g, "kg");
+  try {
+    return result.to(target);
+  } catch {
+    return result;
+  }
+}
+
 const MODEL_DOCS: Record<ModelId, { doc: string; method: string; example: string }> = {
   idealgas: { doc: "Ideal-gas model (Z = 1, no departures): the baseline every real-gas result is compared with.", method: "P V = R T.", example: 'idealgas("nitrogen")' },
   vdw: { doc: "van der Waals cubic equation of state (1873): qualitative; Zc = 3/8.", method: "P = RT/(V - b) - a/V^2 with a, b from Tc and Pc; van der Waals one-fluid mixing with kij.", example: 'vdw("carbon dioxide")' },
@@ -78,9 +99,9 @@ export const thermo: BuiltinDef[] = [
     ],
     returns: "any",
     doc: "A molar quantity on a mass basis: x / M (J/mol -> J/g, m^3/mol -> m^3/kg).",
-    method: "Division by the molar mass you give (never guessed); units simplified.",
+    method: "Division by the molar mass you give (never guessed); shown per kg with the numerator's units (10 kJ/mol / 44.097 g/mol = 226.773 kJ/kg, not 0.226773 kJ/g).",
     examples: ['per_mass(10 kJ/mol, 44.097 g/mol)', 'per_mass(1 kJ/mol, substance("methane").M)'],
-    impl: ({ x, M }) => per_mass(x, M),
+    impl: ({ x, M }) => perKilogram(per_mass(x, M), x),
   }),
   defineBuiltin({
     name: "per_mole",

@@ -3,7 +3,10 @@
  * state() takes T and P (scalars, or arrays/spans for a whole curve at the cost of plain-number
  * loops) or a record of any two properties; if97() models route to IAPWS-IF97.
  */
-import { departure as thermoDeparture, maxwellResidual, stateFrom, type Spec } from "../../thermo/index.js";
+import {
+  departure as thermoDeparture, maxwellResidual, psat as thermoPsat, requireSaturationP, requireSaturationT, stateFrom,
+  tsat as thermoTsat, twoPhase, type Spec,
+} from "../../thermo/index.js";
 import { UnitsError } from "../../units/index.js";
 import { modelDataOf, type ModelData } from "../values/thermo.js";
 import { ArgumentError } from "./bind.js";
@@ -90,7 +93,7 @@ function specOf(d: ModelData, raw: Record<string, number>, fn: string): Spec {
     if (k === "v") set("V", v * d.M, k);
     else if (k === "rho") set("V", d.M / v, k);
     else if (k === "h" || k === "s" || k === "u") set(k.toUpperCase() as "H", v * d.M, k);
-    else if (k === "x") throw new ArgumentError(`argument spec of ${fn}(): x (vapour fraction) is accepted by if97() only; for ${d.id}() give two of T, P, V, H, S, U`);
+    else if (k === "x") throw new ArgumentError(`argument spec of ${fn}(): x (vapour fraction) goes with T or P, as {T: .., x: ..} or {P: .., x: ..}`);
     else set(k as keyof Spec, v, k);
   }
   if ((spec.H !== undefined || spec.S !== undefined || spec.U !== undefined) && !d.idealGas) {
@@ -99,11 +102,33 @@ function specOf(d: ModelData, raw: Record<string, number>, fn: string): Spec {
   return spec;
 }
 
+/**
+ * A saturated state of a pure fluid from {T, x} or {P, x}: psat(T) or tsat(P) by equal fugacity (with
+ * the triple-point checks of psat()/tsat()), then the lever rule between the saturated liquid (x = 0)
+ * and vapour (x = 1) on every molar property.
+ */
+function saturatedAt(d: ModelData, a: Record<string, number>, fn: string): Row {
+  const x = a.x!;
+  const other = a.T !== undefined ? "T" : a.P !== undefined ? "P" : undefined;
+  if (!other) throw new ArgumentError(`argument spec of ${fn}(): x (vapour fraction) goes with T or P, as {T: .., x: ..} or {P: .., x: ..}`);
+  if (!(x >= 0 && x <= 1)) throw new ArgumentError(`argument spec of ${fn}(): x (vapour fraction) must lie in 0..1 (0 saturated liquid, 1 saturated vapour), got ${x}`);
+  if (d.eos!.fluid.components.length !== 1) throw new ArgumentError(`argument spec of ${fn}(): {${other}, x} needs a pure fluid; ${d.fluidText} is a mixture (its bubble and dew points differ; no flash is made here)`);
+  const sat = other === "T"
+    ? guard(fn, () => { requireSaturationT(d.eos!, a.T!); return thermoPsat(d.eos!, a.T!); }, { model: "m" })
+    : guard(fn, () => {
+      requireSaturationP(d.eos!, a.P!);
+      const s = thermoTsat(d.eos!, a.P!);
+      requireSaturationP(d.eos!, a.P!, s.T);
+      return s;
+    }, { model: "m" });
+  return rowOf(d, twoPhase(d.eos!, sat, x, d.idealGas), fn);
+}
+
 function stateFromRecord(d: ModelData, record: Record<string, unknown>, ctx: BuiltinContext) {
   const fn = "state";
   const keys = Object.keys(record);
   for (const k of keys) {
-    if (!SPEC_DIMS[k]) throw new ArgumentError(`argument spec of state(): unknown property "${k}"; give two of T, P, V (or v, rho), H (or h), S (or s), U (or u)`);
+    if (!SPEC_DIMS[k]) throw new ArgumentError(`argument spec of state(): unknown property "${k}"; give two of T, P, V (or v, rho), H (or h), S (or s), U (or u), or T or P with x (vapour fraction)`);
   }
   if (keys.length !== 2) throw new ArgumentError(`argument spec of state() needs exactly two properties, like {P: 10 bar, H: 5 kJ/mol}; got ${keys.length}: {${keys.join(", ")}}`);
   const inputs: Record<string, number | Float64Array> = {};
@@ -111,7 +136,9 @@ function stateFromRecord(d: ModelData, record: Record<string, unknown>, ctx: Bui
   for (const k of ["T", "P", "V", "v", "rho"]) if (inputs[k] !== undefined) requireAllAbove0(fn, k, inputs[k]!, k === "T" ? "K" : k === "P" ? "Pa" : "m^3/mol");
   const point = d.id === "if97"
     ? (a: Record<string, number>) => waterFromSpec({ ...a }, fn)
-    : (a: Record<string, number>) => rowOf(d, guard(fn, () => stateFrom(d.eos!, specOf(d, a, fn), { idealGas: d.idealGas }), { spec: "spec" }), fn);
+    : inputs.x !== undefined
+      ? (a: Record<string, number>) => saturatedAt(d, a, fn)
+      : (a: Record<string, number>) => rowOf(d, guard(fn, () => stateFrom(d.eos!, specOf(d, a, fn), { idealGas: d.idealGas }), { spec: "spec" }), fn);
   return evaluate(d, inputs, point, fn, ctx);
 }
 
@@ -151,7 +178,11 @@ function departureRecord(d: ModelData, inputs: Record<string, number | Float64Ar
   return out;
 }
 
-const CHANGE = { T: "temperature", P: "pressure", V: "molar_volume", H: "molar_energy", S: "molar_entropy", U: "molar_energy", G: "molar_energy", A: "molar_energy" } as const;
+const CHANGE = {
+  T: "temperature", P: "pressure", V: "molar_volume", H: "molar_energy", S: "molar_entropy", U: "molar_energy", G: "molar_energy", A: "molar_energy",
+  // Per mass, where the states carry them (molar mass known): dv, dh, ds, du, dg, da.
+  v: "specific_volume", h: "specific_energy", s: "specific_entropy", u: "specific_energy", g: "specific_energy", a: "specific_energy",
+} as const;
 
 export const thermoState: BuiltinDef[] = [
   defineBuiltin({
@@ -164,10 +195,10 @@ export const thermoState: BuiltinDef[] = [
       { name: "phase", type: "any", optional: true, doc: '"stable" (default, lowest Gibbs energy), "liquid" or "vapor" root, as text or as a record {phase: "liquid"}' },
     ],
     returns: "record",
-    doc: "The state of a fluid: T, P, phase, V, v, rho, Z, totals H, S, U, G, A (molar, vs the stated reference) and h, s, u, g, a (per mass), departures HR, SR, UR, GR, AR, phi, lnphi, f (fugacity), Cp, Cv, cp, cv, w (speed of sound), x (vapour fraction) when two-phase, the model, reference and cautions. Read fields as s.H, s.Z ...; spans give columns.",
+    doc: "The state of a fluid: T, P, phase, V, v, rho, Z, totals H, S, U, G, A (molar, vs the stated reference) and h, s, u, g, a (per mass), departures HR, SR, UR, GR, AR, phi, lnphi, f (fugacity), Cp, Cv, cp, cv, w (speed of sound), x (vapour fraction) when two-phase, the model, reference and cautions. Read fields as s.H, s.Z ...; spans give columns. A saturated or two-phase state of a pure fluid: state(m, {T: .., x: ..}) or {P: .., x: ..} (x = 0 saturated liquid, 1 saturated vapour).",
     method: "Equation of state: volume root chosen by lowest Gibbs energy (or as asked), closed-form departures, ideal-gas Cp integrals; Cp, Cv and w from P-V-T derivatives. Two-property specs solved by Brent's method on the model (two-phase by the lever rule below Tc). if97(): IAPWS-IF97 regions and backward equations.",
     source: "lib/thermo (models, departures, IF97); each model's display names its published source",
-    examples: ['state(pr("propane"), 350 K, 10 bar)', 'state(pr("propane"), 300 K, 20 bar, "liquid").rho', 'state(srk("methane"), span(200 K, 300 K, 3), 50 bar).Z', 'state(pr("propane"), {P: 10 bar, H: 15 kJ/mol}).T', "state(if97(), {P: 10 bar, x: 0.5}).h"],
+    examples: ['state(pr("propane"), 350 K, 10 bar)', 'state(pr("propane"), 300 K, 20 bar, "liquid").rho', 'state(pr("propane"), {T: 300 K, x: 0.4}).H', 'state(srk("methane"), span(200 K, 300 K, 3), 50 bar).Z', 'state(pr("propane"), {P: 10 bar, H: 15 kJ/mol}).T', "state(if97(), {P: 10 bar, x: 0.5}).h"],
     impl: ({ m, T, P, phase }, ctx) => {
       const d = dataOf(m);
       const ph = phaseArg(phase, "state", ctx);
@@ -241,7 +272,7 @@ export const thermoState: BuiltinDef[] = [
       { name: "s2", type: "record", doc: "the second state, same model, fluid and reference" },
     ],
     returns: "record",
-    doc: "Property changes from s1 to s2: dT, dP, dV, dH, dS, dU, dG, dA (molar). Both states must come from the same model, fluid and reference state; spans give columns.",
+    doc: "Property changes from s1 to s2: dT, dP, dV, dH, dS, dU, dG, dA (molar) and dv, dh, ds, du, dg, da (per mass, where the molar mass is known). Both states must come from the same model, fluid and reference state; spans give columns.",
     method: "Differences of the state records' values (s2 - s1); the reference state cancels.",
     examples: ['m = pr("propane"); change(state(m, 300 K, 1 bar), state(m, 400 K, 10 bar)).dH'],
     impl: ({ s1, s2 }, ctx) => {

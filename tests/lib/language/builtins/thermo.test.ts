@@ -60,7 +60,7 @@ describe("mixture", () => {
     expect(errorOf("mixture({methan: 0.5, ethane: 0.5})")).toMatch(/argument fractions of mixture\(\): unknown substance "methan"\. Did you mean: methane/);
     expect(errorOf("mixture({methane: -0.5, ethane: 0.5})")).toMatch(/must be a number >= 0/);
     expect(errorOf("mixture({methane: 0.5, ethane: 0.5}, [[0, 0.1]])")).toMatch(/argument kij of mixture\(\) must be a 2 x 2 matrix/);
-    expect(errorOf('mixture({methane: 0.5, ethane: 0.5}, {"methane/propane": 0.1})')).toMatch(/must name two components/);
+    expect(errorOf('mixture({methane: 0.5, ethane: 0.5}, {"methane/propane": 0.1})')).toMatch(/must name two different components of the mixture as "a\/b"/);
     expect(errorOf("mixture({methane: 0.5, CH4: 0.5})")).toMatch(/same substance/);
   });
   it("mixture kij changes the PR mixture's Z (k_ij enters a_ij = sqrt(a_i a_j)(1 - k_ij))", () => {
@@ -94,5 +94,27 @@ describe("per_mass", () => {
     expect(num("per_mass(10 kJ/mol, 44.097 g/mol)", "kJ/kg")).toBeCloseTo(10 / 0.044097, 8);
     expect(num("per_mole(2257 kJ/kg, 18.015 g/mol)", "kJ/mol")).toBeCloseTo(2257 * 0.018015, 8);
     expect(errorOf("per_mass(10 kJ/kg, 44 g/mol)")).toMatch(/argument x of per_mass\(\) needs a per-mole quantity/);
+  });
+});
+
+describe("per_mass display (QA issue 5, P4)", () => {
+  it("per_mass shows per kg in the numerator's units: 10 kJ/mol / 44.097 g/mol = 226.773 kJ/kg", () => {
+    // Arithmetic: 10 kJ/mol / 0.044097 kg/mol = 226.773 kJ/kg.
+    const v = value("per_mass(10 kJ/mol, 44.097 g/mol)") as Unit;
+    expect(v.formatUnits()).toBe("kJ / kg");
+    expect(v.toNumber("kJ/kg")).toBeCloseTo(226.7728, 3);
+    expect((value("per_mass(10 J/(mol K), 44.097 g/mol)") as Unit).formatUnits()).toBe("J / (kg K)");
+    // A kmol basis keeps its meaning: 10 kJ/kmol / 44.097 kg/kmol = 0.226773 kJ/kg.
+    expect(num("per_mass(10 kJ/kmol, 44.097 kg/kmol)", "kJ/kg")).toBeCloseTo(0.226773, 6);
+  });
+});
+
+describe("change per mass (QA issue 5, P4)", () => {
+  it("change() gives dh, ds, du, dg, dv per mass where M is known, equal to the molar changes over M", () => {
+    session.run('cm = pr("propane"); c = change(state(cm, 300 K, 1 bar), state(cm, 400 K, 10 bar));', sink);
+    const M = 0.044097; // propane, SVNA Table B.1 (from memory)
+    for (const [mol, mass, um, us] of [["dH", "dh", "J/mol", "J/kg"], ["dS", "ds", "J/(mol K)", "J/(kg K)"], ["dU", "du", "J/mol", "J/kg"], ["dG", "dg", "J/mol", "J/kg"], ["dV", "dv", "m^3/mol", "m^3/kg"]] as const) {
+      expect(Math.abs(num(`c.${mass}`, us) / (num(`c.${mol}`, um) / M) - 1)).toBeLessThan(1e-12);
+    }
   });
 });

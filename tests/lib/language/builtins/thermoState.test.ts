@@ -3,7 +3,7 @@ import type { Unit } from "mathjs";
 import { createSessionWithInternals } from "../../../../lib/language/createSession.js";
 import { isQuantityColumn } from "../../../../lib/language/values/column.js";
 import {
-  getSubstance, heatCapacity, idealGasFunctions, pr as prModel, pureFluid, state as thermoState, departure as thermoDeparture,
+  getSubstance, heatCapacity, idealGasFunctions, pr as prModel, psat as libPsat, pureFluid, state as thermoState, departure as thermoDeparture,
 } from "../../../../lib/thermo/index.js";
 
 const { session, internals } = createSessionWithInternals({ shouldStop: () => false });
@@ -295,5 +295,31 @@ describe("QA issue 5 fixes in state() and departure()", () => {
     // 288.15 K (15 degC standard conditions) lies within 10 % of the fit's 298 K start: no Cp note.
     expect((value('state(pr("methane"), 288.15 K, 1 bar)') as Record<string, unknown>).notes).toBeUndefined();
     expect(value('state(pr("methane"), 200 K, 1 bar).notes')).toMatch(/extrapolated more than 10 % outside its fitted range/);
+  });
+});
+
+describe("state(m, {T or P, x}) for equations of state (QA issue 5, P4)", () => {
+  it("state(m, {T, x}) is the lever rule between psat's saturated liquid and vapour", () => {
+    // Independent route: the library's psat at 300 K gives both saturated roots; x = 0.4 mixes them.
+    const lib = libPsat(prModel(pureFluid(getSubstance("propane"))), 300);
+    expect(rel(num("state(m, {T: 300 K, x: 0.4}).P", "Pa"), lib.P)).toBeLessThan(1e-12);
+    expect(rel(num("state(m, {T: 300 K, x: 0.4}).V", "m^3/mol"), 0.6 * lib.VL + 0.4 * lib.VV)).toBeLessThan(1e-12);
+    expect(value("state(m, {T: 300 K, x: 0.4}).phase")).toBe("two-phase");
+    // The latent heat: H(x = 1) - H(x = 0) = Hvap; propane at 300 K about 14.8 kJ/mol (NIST webbook, from memory; PR within 5 %).
+    const dH = num("state(m, {T: 300 K, x: 1}).H", "J/mol") - num("state(m, {T: 300 K, x: 0}).H", "J/mol");
+    expect(rel(dH, lib.Hvap)).toBeLessThan(1e-9);
+    expect(rel(dH, 14.8e3)).toBeLessThan(0.05);
+  });
+  it("state(m, {P, x}) solves tsat first; its T reproduces P by psat (round trip 1e-9)", () => {
+    const T = num("state(m, {P: 10 bar, x: 0.5}).T", "K");
+    expect(rel(libPsat(prModel(pureFluid(getSubstance("propane"))), T).P, 1e6)).toBeLessThan(1e-9);
+    // Propane boils at 300.1 K under 10 bar (NIST webbook saturation table, from memory): PR within 1 %.
+    expect(rel(T, 300.1)).toBeLessThan(0.01);
+  });
+  it("state(m, {T, x}) errors: x outside 0..1, mixtures, below the triple point", () => {
+    expect(errorOf("state(m, {T: 300 K, x: 1.5})")).toMatch(/x \(vapour fraction\) must lie in 0\.\.1/);
+    expect(errorOf('state(pr(mixture({methane: 0.5, ethane: 0.5})), {T: 150 K, x: 0.5})')).toMatch(/needs a pure fluid/);
+    // CO2 triple point 216.592 K (Span & Wagner 1996, from memory).
+    expect(errorOf('state(pr("CO2"), {T: 200 K, x: 0.5})')).toMatch(/argument T of state\(\): T = 200 K is below the triple point/);
   });
 });
