@@ -5,7 +5,7 @@
  * output back). The result carries units of f times x (integrate), of x (seek) or of f over x (slope).
  */
 import type { Unit } from "mathjs";
-import { brent, derivative, integrate, NumericsError, StopRequested } from "../../numerics/index.js";
+import { brent, derivative, integrate, NumericsError, RootError, StopRequested } from "../../numerics/index.js";
 import { ArgumentError } from "./bind.js";
 import { defineBuiltin, type BuiltinContext, type BuiltinDef } from "./define.js";
 
@@ -56,7 +56,7 @@ function axisOf(fn: string, args: [string, unknown][], ctx: BuiltinContext): Axi
 }
 
 /** f as a plain SI function: probes once at x0 to learn the output unit, then converts each call. */
-function plainFunction(fn: string, f: unknown, axis: Axis, x0: number, ctx: BuiltinContext): { g: (x: number) => number; yUnit: string } {
+function plainFunction(fn: string, f: unknown, axis: Axis, x0: number, ctx: BuiltinContext): { g: (x: number) => number; yUnit: string; yShown: string } {
   const probe = ctx.call(f, axis.quantity(x0));
   let yUnit: string;
   if (typeof probe === "number") yUnit = "";
@@ -71,7 +71,9 @@ function plainFunction(fn: string, f: unknown, axis: Axis, x0: number, ctx: Buil
       `argument f of ${fn}() changed its output: ${ctx.textOf(y)} at x = ${ctx.textOf(axis.quantity(x))}, but ${ctx.textOf(ref)} at x = ${ctx.textOf(axis.quantity(x0))}`,
     );
   };
-  return { g, yUnit };
+  // f in the user's unit of x when it has the dimension of x (f(p) = p - 0.5 bar), else as f made it.
+  const yShown = !isUnit(probe) ? "" : axis.unit !== "" && axis.unit === yUnit ? axis.shown : probe.formatUnits();
+  return { g, yUnit, yShown };
 }
 
 /**
@@ -98,6 +100,24 @@ function optionsOf(fn: string, rec: unknown, allowed: readonly string[]): Record
     out[k] = v;
   }
   return out;
+}
+
+/**
+ * A sign change of f that is not a root: where bracketing ended, |f| is not small against its
+ * values at the ends of the bracket (a root has |f| near 0 there). Growing without bound (1e6 times the ends) is a pole,
+ * such as a division by zero; otherwise a jump (a step or other discontinuity).
+ */
+function poleError(g: (x: number) => number, x: number, fl: number, fh: number, xText: (x: number) => string, yText: (y: number) => string, converged: boolean): ArgumentError | undefined {
+  const y = g(x);
+  const ends = Math.max(Math.abs(fl), Math.abs(fh));
+  // At a root of a continuous f, |f| where the bracket closed is tiny against the ends (1e-16 for a
+  // straight line, 6e-6 for a cube-root crossing). 1/10 of the ends for a converged bracket leaves
+  // room for very steep crossings; a run that did not converge is judged more strictly.
+  const limit = converged ? 0.1 * ends : 1e-3 * ends;
+  if (!(Math.abs(y) > limit) && Number.isFinite(y)) return undefined;
+  const pole = !Number.isFinite(y) || Math.abs(y) > 1e6 * ends;
+  const how = pole ? `|f| grows without bound there (f = ${yText(y)}): a pole, such as a division by zero` : `f jumps there (f = ${yText(y)}, not near 0): a step or other discontinuity`;
+  return new ArgumentError(`seek(): f changes sign near x = ${xText(x)} without crossing zero; ${how}. There is no root there: choose lo and hi on one side of it`);
 }
 
 /** Runs a numerics call, turning an interrupt into the language's interrupt and numerics errors into argument-level ones. */
@@ -182,10 +202,37 @@ export const numerics: BuiltinDef[] = [
       }
       const opts = optionsOf("seek", options, ["expand", "rtol", "xtol", "maxIter"]);
       if (isUnit(opts.xtol)) opts.xtol = axis.si(opts.xtol, "options.xtol");
-      const { g } = plainFunction("seek", f, axis, l, ctx);
-      const r = guarded("seek", ctx, () => brent(g, l, h, { ...opts, shouldStop: ctx.shouldStop }, "seek"));
-      if (axis.unit === "") return r.value;
-      return (ctx.units.fromSI(r.value, axis.unit) as Unit).to(axis.shown);
+      const { g, yUnit, yShown } = plainFunction("seek", f, axis, l, ctx);
+      const show = (x: number, unit: string, shown: string) => (unit === "" ? String(Number(x.toPrecision(6))) : ctx.textOf((ctx.units.fromSI(x, unit) as Unit).to(shown)));
+      // An estimate within 1e-9 of the bracket width from 0 is shown as 0 (a pole at 0 stalls at -1e-150).
+      const xText = (x: number) => show(Math.abs(x) < 1e-9 * Math.abs(h - l) ? 0 : x, axis.unit, axis.shown);
+      const yText = (y: number) => show(y, yUnit, yShown);
+      // Checked here rather than left to brent so the message shows the user's units.
+      const fl = g(l);
+      const fh = g(h);
+      if (!opts.expand && fl !== 0 && fh !== 0 && Math.sign(fl) === Math.sign(fh)) {
+        throw new ArgumentError(`seek(): f(lo) = ${yText(fl)} at lo = ${xText(l)} and f(hi) = ${yText(fh)} at hi = ${xText(h)} have the same sign, so no root is bracketed; choose lo and hi on either side of the root, or pass {expand: true}`);
+      }
+      let x: number;
+      let lastEstimate: number | undefined;
+      try {
+        x = guarded("seek", ctx, () => {
+          try {
+            return brent(g, l, h, { ...opts, shouldStop: ctx.shouldStop }, "seek").value;
+          } catch (e) {
+            if (e instanceof RootError && /no convergence/.test(e.message)) lastEstimate = e.value;
+            throw e;
+          }
+        });
+      } catch (e) {
+        if (lastEstimate === undefined || !Number.isFinite(lastEstimate) || !(e instanceof ArgumentError)) throw e;
+        const at = lastEstimate;
+        throw poleError(g, at, fl, fh, xText, yText, false) ?? new ArgumentError(`${e.message.replace(/ \(bracket \[.*\]\)/, "")} (last estimate x = ${xText(at)}, f = ${yText(g(at))})`);
+      }
+      const pole = poleError(g, x, fl, fh, xText, yText, true);
+      if (pole) throw pole;
+      if (axis.unit === "") return x;
+      return (ctx.units.fromSI(x, axis.unit) as Unit).to(axis.shown);
     },
   }),
   defineBuiltin({

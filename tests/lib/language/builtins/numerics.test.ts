@@ -108,6 +108,24 @@ describe("seek (built-in)", () => {
   it("seek without a sign change says so", () => {
     expect(errorOf("seek(f(x) = x^2 + 1, -1, 1)")).toMatch(/same sign/);
   });
+  it("seek without a sign change shows f and the bracket in the user's units, not SI numbers", () => {
+    // f(1 bar) = 1 bar - 0.5 bar = 0.5 bar; f(2 bar) = 1.5 bar (arithmetic).
+    expect(errorOf("seek(f(p) = p - 0.5 bar, 1 bar, 2 bar)")).toMatch(/^seek\(\): f\(lo\) = 0\.5 bar at lo = 1 bar and f\(hi\) = 1\.5 bar at hi = 2 bar have the same sign/);
+    expect(errorOf("seek(f(T) = T - 100 degC, 0 degC, 50 degC)")).toMatch(/at lo = 0 degC .* at hi = 50 degC/);
+  });
+  it("seek across a pole says there is a pole, not a convergence failure", () => {
+    // 1/x changes sign at x = 0 through infinity (calculus); tan has a pole at pi/2 = 1.5708.
+    expect(errorOf("seek(f(x) = 1/x, -1, 1)")).toMatch(/^seek\(\): f changes sign near x = 0 without crossing zero; \|f\| grows without bound there .*a pole/);
+    expect(errorOf("seek(f(x) = tan(x), 1, 2)")).toMatch(/near x = 1\.5708 .*a pole/);
+    expect(errorOf("seek(f(T) = 1 K/(T - 300 K), 250 K, 350 K)")).toMatch(/near x = 300 K .*a pole/);
+  });
+  it("seek across a step says there is a discontinuity", () => {
+    expect(errorOf("seek(f(x) = (x > 0.5) - 0.5, -1, 2)")).toMatch(/near x = 0\.5 without crossing zero; f jumps there .*discontinuity/);
+  });
+  it("seek still finds steep and tiny roots (a root is not mistaken for a pole)", () => {
+    expect(value("seek(f(x) = 1e12*(x - 1), 0, 3)")).toBeCloseTo(1, 12);
+    expect(value("seek(f(x) = x^3 - 1e-30, -1, 1)")).toBeCloseTo(1e-10, 20); // cube root of 1e-30
+  });
 });
 
 describe("slope (built-in)", () => {
