@@ -2,7 +2,7 @@
  * Finishing display bundles before they leave the engine: lib/display's renderPending adds the SVG and
  * PNG copies to chart bundles (vega and resvg load on the first chart only); other bundles pass through.
  */
-import { isPending, renderPending, type MimeBundle } from "../../lib/display/index.js";
+import { chartBundle, isPending, renderPending, type MimeBundle } from "../../lib/display/index.js";
 
 const isBundle = (v: unknown): v is MimeBundle => typeof v === "object" && v !== null && typeof (v as Record<string, unknown>)["text/plain"] === "string";
 
@@ -37,4 +37,17 @@ export async function finishBundles<T>(message: T): Promise<T> {
   const slot = slotOf(message);
   if (!slot || !isPending(slot.bundle)) return message;
   return slot.put(await renderPending(slot.bundle)) as T;
+}
+
+/**
+ * Loads and exercises the chart renderer once (a three-point chart, SVG and PNG), so the user's first
+ * chart costs what later ones do. Failures are ignored: the first real chart reports them.
+ */
+export async function warmRenderer(): Promise<boolean> {
+  try {
+    const warm = await renderPending(chartBundle({ x: { title: "x" }, y: { title: "y" }, series: [{ label: "warm-up", x: [0, 1, 2], y: [0, 1, 4] }] }));
+    return typeof warm["image/svg+xml"] === "string";
+  } catch {
+    return false;
+  }
 }

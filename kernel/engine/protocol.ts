@@ -21,4 +21,6 @@ export interface WorkerData {
   flag: SharedArrayBuffer;
   /** Module URL exporting createSession (default: the cell language). */
   sessionModule: string;
+  /** Load the chart renderer when idle (default true). */
+  warmCharts?: boolean;
 }

@@ -5,7 +5,7 @@
 import { parentPort, workerData } from "node:worker_threads";
 import type { CellSink, Session, SessionOptions } from "../../lib/language/index.js";
 import type { FromWorker, ToWorker, WorkerData } from "./protocol.js";
-import { finishBundles, needsFinishing } from "./finish.js";
+import { finishBundles, needsFinishing, warmRenderer } from "./finish.js";
 
 type SessionFactory = (options: SessionOptions) => Session;
 
@@ -49,7 +49,24 @@ const sessionReady: Promise<Session> = (import(data.sessionModule) as Promise<{ 
   return session;
 });
 
+// The chart libraries (vega, vega-lite, resvg: about half a second) load once the engine has been idle
+// for a moment, so the first chart does not pay for them; never during kernel start and never while
+// requests are arriving back to back.
+const WARM_AFTER_IDLE_MS = 300;
+let warmed = false;
+let warmTimer: NodeJS.Timeout | undefined;
+const warmWhenIdle = () => {
+  clearTimeout(warmTimer);
+  if (warmed || data.warmCharts === false) return;
+  warmTimer = setTimeout(() => {
+    warmed = true;
+    void warmRenderer();
+  }, WARM_AFTER_IDLE_MS);
+  warmTimer.unref();
+};
+
 port.on("message", (request: ToWorker) => {
+  clearTimeout(warmTimer);
   if (session) return handle(session, request);
   void sessionReady.then(
     (s) => handle(s, request),
@@ -85,9 +102,14 @@ function handle(session: Session, request: ToWorker): void {
         break;
     }
   } catch (e) {
+    warmWhenIdle();
     return post({ kind: "fail", id, message: (e as Error)?.stack ?? String(e) });
   }
   post({ kind: "done", id, value });
+  warmWhenIdle();
 }
 
-void sessionReady.then(() => post({ kind: "ready" }), () => {});
+void sessionReady.then(() => {
+  post({ kind: "ready" });
+  warmWhenIdle();
+}, () => {});

@@ -1,6 +1,6 @@
 import { describe, expect, it } from "vitest";
 import { chartBundle, MIME } from "../../../lib/display/index.js";
-import { finishBundles, needsFinishing } from "../../../kernel/engine/finish.js";
+import { finishBundles, needsFinishing, warmRenderer } from "../../../kernel/engine/finish.js";
 
 describe("finishBundles", () => {
   it("finishBundles leaves messages without bundles and plain bundles untouched", async () => {
@@ -27,5 +27,11 @@ describe("finishBundles", () => {
     expect(needsFinishing({ kind: "done", id: 1, value: { ok: true, result: { [MIME.text]: "2 bar" } } })).toBe(false);
     expect(needsFinishing({ kind: "output", id: 1, output: { kind: "stdout", text: "x" } })).toBe(false);
     expect(needsFinishing({ kind: "done", id: 1, value: { ok: false, error: { ename: "E", evalue: "", traceback: [] } } })).toBe(false);
+  });
+});
+
+describe("warmRenderer", () => {
+  it("warmRenderer loads the chart renderer and reports that a picture was made", async () => {
+    expect(await warmRenderer()).toBe(true);
   });
 });
