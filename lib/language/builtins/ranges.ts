@@ -1,11 +1,14 @@
 /**
  * span and logspan: evenly and logarithmically spaced values with units, returned as one compact
  * column (SI numbers + the unit of the first end point) that vectorised built-ins read directly.
+ * Offset units (degC, barg): both space absolute values; for span that is the same as spacing the
+ * offset numbers, for logspan it is the only meaningful ratio (documented in its help, noted on use).
  */
 import type { Unit } from "mathjs";
 import { ArgumentError } from "./bind.js";
 import { defineBuiltin, type BuiltinContext, type BuiltinDef } from "./define.js";
 import { MAX_ELEMENTS as MAX_POINTS } from "../guards.js";
+import { isOffsetQuantity } from "../../units/index.js";
 
 interface Ends { a: number; b: number; siUnit: string; displayUnit: string }
 
@@ -63,14 +66,20 @@ export const ranges: BuiltinDef[] = [
       { name: "n", type: "number", doc: "number of points, 2 or more" },
     ],
     returns: "column",
-    doc: "n logarithmically spaced values from a to b inclusive (constant ratio between neighbours), in the unit of a. Suits pressure sweeps over decades.",
-    method: "a (b/a)^(i/(n-1)) for i = 0..n-1 on absolute SI values; the last point is exactly b.",
-    examples: ["logspan(1 bar, 100 bar, 3)", "logspan(1e-3, 1, 4)"],
+    doc: "n logarithmically spaced values from a to b inclusive (constant ratio between neighbours), in the unit of a. Suits pressure sweeps over decades. With an offset unit (degC, degF, barg, psig) the constant ratio is between ABSOLUTE values (K, Pa), and the points are shown back in the unit of a: logspan(1 degC, 100 degC, 3) is 274.15 K, 319.84 K, 373.15 K = 1, 46.69, 100 degC. A ratio of Celsius or gauge numbers has no physical meaning (0 degC or 0 barg would be a log of zero); a note says so when it applies.",
+    method: "a (b/a)^(i/(n-1)) for i = 0..n-1 on absolute SI values (offset units resolved first); the last point is exactly b.",
+    examples: ["logspan(1 bar, 100 bar, 3)", "logspan(1e-3, 1, 4)", "logspan(1 barg, 100 barg, 3)"],
     impl: ({ a, b, n }, ctx) => {
       const e = ends("logspan", a, b, ctx);
       const k = count("logspan", n);
       if (!(e.a > 0 && e.b > 0)) {
         throw new ArgumentError(`logspan(): a and b must be positive (absolute), got ${ctx.textOf(a)} and ${ctx.textOf(b)}`);
+      }
+      if (isOffsetQuantity(a) || isOffsetQuantity(b)) {
+        const dim = ctx.units.dimensionOf(a as Unit);
+        const named = dim ? ctx.units.siUnitOf(dim) : e.siUnit;
+        const abs = (x: number) => ctx.textOf(ctx.units.fromSI(x, named));
+        ctx.warn(`logspan(): ${e.displayUnit} is an offset unit; the points have a constant ratio of absolute values (${abs(e.a)} to ${abs(e.b)}) and are shown in ${e.displayUnit}`);
       }
       const out = new Float64Array(k);
       const ratio = Math.log(e.b / e.a) / (k - 1);

@@ -47,6 +47,32 @@ describe("logspan", () => {
     expect(c.si[1]).toBeCloseTo(1e6, 6);
     expect(c.si[2]).toBe(1e7);
   });
+  it("logspan of offset units spaces absolute values by a constant ratio and shows the user's unit, with a note", () => {
+    const out: string[] = [];
+    const s = createSession({ shouldStop: () => false });
+    const r = s.run("logspan(1 degC, 100 degC, 3)", { stdout: (t) => out.push(t), display() {}, clear() {} });
+    // Middle point sqrt(274.15 K x 373.15 K) = 319.842 K = 46.6923 degC (python3; SI Brochure T/K = t/degC + 273.15).
+    expect(r.ok && r.result!["text/plain"]).toBe("[1, 46.6923, 100] degC");
+    expect(out.join("")).toMatch(/logspan\(\): degC is an offset unit; the points have a constant ratio of absolute values \(274\.15 K to 373\.15 K\)/);
+    const c = value("logspan(1 degC, 100 degC, 3)");
+    if (!isQuantityColumn(c)) throw new Error("not a column");
+    expect(c.si[1]! / c.si[0]!).toBeCloseTo(c.si[2]! / c.si[1]!, 12); // constant ratio in kelvin
+    expect(c.si[1]).toBeCloseTo(Math.sqrt(274.15 * 373.15), 9);
+    // Gauge: sqrt(2.01325 bar x 101.01325 bar) - 1.01325 bar = 13.2474 barg (gauge against 1 atm = 1.01325 bar).
+    const g = value("logspan(1 barg, 100 barg, 3)");
+    if (!isQuantityColumn(g)) throw new Error("not a column");
+    expect(g.unit).toBe("barg");
+    expect(g.si[1]).toBeCloseTo(Math.sqrt(201325 * 10101325), 4);
+    // degF: sqrt(491.67 x 671.67) degR - 459.67 = 114.995 degF (NIST SP 811 B.8: T/degR = t/degF + 459.67).
+    const f = s.run("logspan(32 degF, 212 degF, 3)", { stdout() {}, display() {}, clear() {} });
+    expect(f.ok && f.result!["text/plain"]).toBe("[32, 114.995, 212] degF");
+  });
+  it("span of offset units is the same in K as in degC (linear spacing), without a note", () => {
+    const out: string[] = [];
+    const r = createSession({ shouldStop: () => false }).run("span(1 degC, 100 degC, 3)", { stdout: (t) => out.push(t), display() {}, clear() {} });
+    expect(r.ok && r.result!["text/plain"]).toBe("[1, 50.5, 100] degC"); // (1 + 100)/2 (arithmetic)
+    expect(out).toEqual([]);
+  });
   it("logspan rejects non-positive ends", () => {
     expect(errorOf("logspan(0, 1, 3)")).toMatch(/positive/);
   });
