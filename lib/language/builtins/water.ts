@@ -4,7 +4,7 @@
  * IF97 is mass-based; molar fields use M = 18.015268 g/mol (IAPWS).
  */
 import {
-  R, WATER_P_CRIT_MPA, WATER_T_CRIT, WATER_VALIDITY, M_WATER, if97State, toMolar, waterResidual,
+  R, WATER_P_CRIT_MPA, WATER_T_CRIT, WATER_VALIDITY, M_WATER, if97State, kelvinText, pressureText, toMolar, waterResidual,
   type IF97Input, type WaterState,
 } from "../../thermo/index.js";
 import { thermoValue, type ModelData } from "../values/thermo.js";
@@ -22,7 +22,7 @@ export type Row = Record<string, number | string>;
 /** Row of a water state; `phase` (if not "stable") must match IF97's single stable phase. */
 export function waterRow(st: WaterState, fn: string, phase?: string): Row {
   if (phase && phase !== "stable" && st.phase !== phase && !(st.phase === "two-phase")) {
-    throw new ArgumentError(`argument phase of ${fn}(): water at T = ${Number(st.T.toPrecision(6))} K, P = ${Number(st.p.toPrecision(6))} Pa is ${st.phase} (IF97 region ${st.region}); IF97 gives only the stable phase, so "${phase}" cannot be had here`);
+    throw new ArgumentError(`argument phase of ${fn}(): water at T = ${kelvinText(st.T)}, P = ${pressureText(st.p)} is ${st.phase} (IF97 region ${st.region}); IF97 gives only the stable phase, so "${phase}" cannot be had here`);
   }
   const m = toMolar(st);
   const row: Row = { T: st.T, P: st.p, phase: st.phase };
