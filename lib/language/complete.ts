@@ -1,11 +1,13 @@
 /**
  * Completion: variables, built-ins, mathjs functions and units by prefix; after `name.` the fields
- * of that record (or RichValue.fields()). Cursor positions are Unicode code points.
+ * of that record (or RichValue.fields()); inside a string, substance names or phase words where the
+ * built-in's parameter takes them (completeString.ts). Cursor positions are Unicode code points.
  */
 import type { CompletionResult } from "./session.js";
 import type { SessionInternals } from "./createSession.js";
 import { codePointToOffset, offsetToCodePoint } from "./statements.js";
 import { isRichValue } from "./values/rich.js";
+import { stringCompletions } from "./completeString.js";
 
 const WORD_TAIL = /[A-Za-z_0-9\u00C0-\uFFFF]*$/;
 
@@ -31,6 +33,8 @@ export function completeAt(internals: SessionInternals, code: string, cursorPos:
     cursorStart: offsetToCodePoint(code, startOffset),
     cursorEnd: cursorPos,
   });
+  const inString = stringCompletions(code, end, internals.registry);
+  if (inString) return { matches: inString.matches, cursorStart: offsetToCodePoint(code, inString.start), cursorEnd: cursorPos };
   const dotted = /([A-Za-z_][A-Za-z_0-9]*(?:\.[A-Za-z_][A-Za-z_0-9]*)*)\.$/.exec(before.slice(0, startOffset));
   if (dotted && !/[0-9]$/.test(before.slice(0, startOffset - 1))) {
     return result(fieldsOf(internals, dotted[1]!.split(".")).filter((f) => f.startsWith(prefix)));

@@ -26,4 +26,11 @@ describe("complete", () => {
     expect(r.matches).toContain("speedy");
     expect([r.cursorStart, r.cursorEnd]).toEqual([4, 7]);
   });
+  it("complete inside quotes offers substance names and phase words, replacing only the typed text", () => {
+    const r = s.complete('m = pr("prop', 12);
+    expect(r.matches).toContain("propane");
+    expect([r.cursorStart, r.cursorEnd]).toEqual([8, 12]);
+    expect(s.complete('state(m, 300 K, 5 bar, "l', 25).matches).toEqual(["liquid"]);
+    expect(s.complete('echo("sp', 8).matches).toEqual([]);
+  });
 });
