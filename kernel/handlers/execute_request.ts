@@ -1,8 +1,8 @@
 /**
  * execute_request: execute_input, the cell's outputs (stream, display_data, update_display_data,
  * clear_output), execute_result or error, user_expressions, then the reply. stop_on_error makes
- * requests that arrived before this reply come back "aborted". A help query's answer (the run result
- * marked help) goes to the pager payload instead of execute_result.
+ * requests that arrived before this reply come back "aborted". A help query's answer (a run result
+ * marked help) goes to the pager payload, or to stderr when it is the no-help note, not to execute_result.
  */
 import type { EngineOutput, RunResult } from "../engine/index.js";
 import type { Json } from "../protocol/index.js";
@@ -30,9 +30,11 @@ export const execute_request: Handler = async (ctx) => {
   // Publishing enqueues at once on the iopub queue, which keeps the cell's order; not awaiting each
   // send keeps the round trip short (clients wait for both the reply and idle anyway).
   const result: RunResult = await ctx.services.engine.execute(code, (o) => void publishOutput(ctx, o));
-  // A help query (`?name`, answered by the language) goes to the pager, as front ends expect.
-  const page = result.ok && result.help === true && result.result !== undefined;
-  if (page) payload.push({ source: "page", data: result.result as unknown as Json, start: 0 });
+  // A help query (`?name`, answered by the language): the help goes to the pager, as front ends
+  // expect; "no help for that name" is a note on stderr. Neither is an execute_result.
+  const help = result.ok && result.result !== undefined ? result.help : undefined;
+  if (result.ok && result.result !== undefined && help === "page") payload.push({ source: "page", data: result.result as unknown as Json, start: 0 });
+  if (result.ok && result.result !== undefined && help === "note") void ctx.publish("stream", { name: "stderr", text: `${result.result["text/plain"]}\n` });
 
   if (!result.ok) {
     const { ename, evalue, traceback } = result.error;
@@ -41,7 +43,7 @@ export const execute_request: Handler = async (ctx) => {
     await ctx.reply({ status: "error", execution_count: count, ename, evalue, traceback, user_expressions: {}, payload: [] });
     return;
   }
-  if (result.result && !silent && !page) {
+  if (result.result && !silent && help === undefined) {
     void ctx.publish("execute_result", { execution_count: count, data: result.result, metadata: {} });
     if (storeHistory) execution.history.setOutput(count, result.result["text/plain"]);
   }

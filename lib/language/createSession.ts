@@ -166,9 +166,8 @@ export function createSessionWithInternals(
     const help = helpTarget(code);
     if (help !== undefined) {
       const answer = answerHelp(help, inspect, knownNames);
-      if (answer.found) return { ok: true, result: answer.bundle, help: true };
-      cellSink.stdout(answer.note);
-      return { ok: true };
+      if (answer.found) return { ok: true, result: answer.bundle, help: "page" };
+      return { ok: true, result: { [MIME.text]: answer.note }, help: "note" };
     }
     sink = cellSink;
     shownIds.clear();

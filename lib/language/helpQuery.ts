@@ -2,7 +2,8 @@
  * Help by query: a cell that is only `?name` or `name?` asks for the help of name (the same text as
  * inspect, at full detail). Handled here, in the language, so every way of running a cell (kernel,
  * in-process engine, runner) answers it alike; the kernel may move the bundle to its pager because
- * the run result says it is help. An unknown name gets a note with close matches instead.
+ * the run result says it is help. An unknown name gets a note with close matches instead (also a
+ * result, marked as a note: a kernel writes it on stderr).
  */
 import type { InspectResult } from "./session.js";
 import { suggestNames } from "./suggest.js";
@@ -26,5 +27,5 @@ export function answerHelp(name: string, inspect: (code: string, cursorPos: numb
   if (r.found && r.bundle) return { found: true, bundle: r.bundle };
   const close = suggestNames(name, known());
   const hint = close.length ? `; did you mean ${close.map((c) => `?${c}`).join(" or ")}?` : "";
-  return { found: false, note: `No help for '${name}': not a known name${hint}\n` };
+  return { found: false, note: `No help for '${name}': not a known name${hint}` };
 }

@@ -22,8 +22,12 @@ export interface CellError {
 }
 
 export type RunResult =
-  /** help: the cell was a help query (`?name`) and result is its help text; a kernel may page it. */
-  | { ok: true; result?: MimeBundle; help?: boolean }
+  /**
+   * help: the cell was a help query (`?name`). "page": result is the help text (a kernel may show it
+   * in its pager); "note": result is a one-line note that there is no help for the name, with close
+   * matches (a kernel may write it on stderr).
+   */
+  | { ok: true; result?: MimeBundle; help?: "page" | "note" }
   | { ok: false; error: CellError };
 
 export interface SessionOptions {

@@ -9,7 +9,7 @@
  *   "announce TEXT" writes TEXT, then loops polling shouldStop (outputs must reach the host mid-cell)
  *   "chart"         displays a Vega-Lite bundle without its SVG (pending), then writes "after"
  *   "uncloneable"   returns a value holding a function (cannot cross a worker boundary)
- *   "?psat"/"psat?" a help result (help: true); "?other" a "No help" note on stdout
+ *   "?psat"/"psat?" a help result (help: "page"); "?other" a "No help" note (help: "note")
  */
 import type { CellSink, RunResult, Session, SessionOptions } from "../../lib/language/index.js";
 
@@ -61,9 +61,8 @@ export function createSession(options: SessionOptions): Session {
     if (code === "uncloneable") return { ok: true, result: { "text/plain": "x", hook: () => 1 } };
     if ((m = /^\s*(?:\?(\w+)|(\w+)\?)\s*$/.exec(code))) {
       const name = m[1] ?? m[2]!;
-      if (name === "psat") return { ok: true, result: { "text/plain": "psat(m, T): saturation pressure" }, help: true };
-      sink.stdout(`No help for '${name}': not a known name\n`);
-      return { ok: true };
+      if (name === "psat") return { ok: true, result: { "text/plain": "psat(m, T): saturation pressure" }, help: "page" };
+      return { ok: true, result: { "text/plain": `No help for '${name}': not a known name` }, help: "note" };
     }
     if (code === "fail") return err("ValueError", "asked to fail");
     if (code === "throw") throw new Error("session fault");

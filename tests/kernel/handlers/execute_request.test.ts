@@ -82,13 +82,14 @@ describe("execute_request", () => {
     expect(reply.content.status).toBe("ok");
   });
 
-  it("execute_request pages a run result marked help instead of publishing it; other output of a help query passes through", async () => {
+  it("execute_request pages a run result marked help, and writes a no-help note on stderr, neither as execute_result", async () => {
     const k = memoryKernel();
     const r = await k.call("shell", "execute_request", exec("?psat"));
     expect(r.reply!.content.payload).toEqual([{ source: "page", data: { "text/plain": "psat(m, T): saturation pressure" }, start: 0 }]);
     expect(r.types).not.toContain("execute_result");
     const m = await k.call("shell", "execute_request", exec("zzz?"));
-    expect(m.iopub.find((x) => x.header.msg_type === "stream")!.content).toEqual({ name: "stdout", text: "No help for 'zzz': not a known name\n" });
+    expect(m.iopub.find((x) => x.header.msg_type === "stream")!.content).toEqual({ name: "stderr", text: "No help for 'zzz': not a known name\n" });
+    expect(m.types).not.toContain("execute_result");
     expect(m.reply!.content).toMatchObject({ status: "ok", payload: [] });
   });
 

@@ -28,8 +28,8 @@ describe("answerHelp", () => {
     expect(answerHelp("psat", inspect, () => [])).toEqual({ found: true, bundle: { "text/plain": "psat help" } });
     expect(asked[0]).toEqual(["psat", 4, 1]);
     const missing = answerHelp("tsatt", inspect, () => ["tsat", "state", "volume"]);
-    expect(missing).toEqual({ found: false, note: "No help for 'tsatt': not a known name; did you mean ?tsat or ?state?\n" });
-    expect(answerHelp("qqqq", inspect, () => ["tsat"])).toEqual({ found: false, note: "No help for 'qqqq': not a known name\n" });
+    expect(missing).toEqual({ found: false, note: "No help for 'tsatt': not a known name; did you mean ?tsat or ?state?" });
+    expect(answerHelp("qqqq", inspect, () => ["tsat"])).toEqual({ found: false, note: "No help for 'qqqq': not a known name" });
   });
 });
 
@@ -41,7 +41,7 @@ describe("run with a help query", () => {
       const r = s.run(code, c.sink);
       expect(r.ok, code).toBe(true);
       if (!r.ok) continue;
-      expect(r.help).toBe(true);
+      expect(r.help).toBe("page");
       expect(r.result!["text/plain"]).toMatch(/^psat\(m: model, T: /);
       // The same text as inspect: one source of help.
       expect(r.result).toEqual(s.inspect("psat", 4, 1).bundle);
@@ -55,10 +55,11 @@ describe("run with a help query", () => {
     const rr = s.run("R?", c.sink);
     expect(rr.ok && rr.result!["text/plain"]).toMatch(/CODATA 2018/);
   });
-  it("run answers ?nosuch with a note on stdout naming close matches, and no result", () => {
+  it("run answers ?nosuch with a note naming close matches, marked as a note", () => {
     const c = silent();
     const r = s.run("?tsatt", c.sink);
-    expect(r).toEqual({ ok: true });
-    expect(c.out.join("")).toMatch(/^No help for 'tsatt': not a known name; did you mean \?tsat/);
+    expect(r.ok && r.help).toBe("note");
+    expect(r.ok && r.result!["text/plain"]).toMatch(/^No help for 'tsatt': not a known name; did you mean \?tsat/);
+    expect(c.out).toEqual([]);
   });
 });
