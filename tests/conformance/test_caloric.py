@@ -4,7 +4,7 @@ run against the installed caloric kernelspec. Every sample attribute is filled; 
 
 Samples that depend on the cell language: echo(...) (stdout), show(...) (display_data), clear()
 (clear_output), completion/inspect of built-in names, is_complete. `?name` help (pager payload) and
-the stderr note for an unknown name are answered by the kernel itself (kernel/handlers/helpQuery.ts).
+the stderr note for an unknown name are answered by the cell language (lib/language/helpQuery.ts); the kernel pages the one and writes the other to stderr.
 """
 import unittest
 
