@@ -7,7 +7,7 @@
 const HELP = `caloric: a Jupyter kernel for engineering thermodynamics
 
 Usage:
-  caloric kernel -f CONNECTION_FILE [--in-process] [--interrupt-grace-ms MS]
+  caloric kernel -f CONNECTION_FILE [--in-process] [--interrupt-grace-ms MS] [--client-renders-charts]
                                                     run the kernel (Jupyter starts this for you);
                                                     a cell that ignores an interrupt for MS (default
                                                     2000) is stopped by restarting the engine
@@ -29,6 +29,7 @@ async function main(argv: string[]): Promise<number> {
       let inProcess = false;
       let graceMs: number | undefined;
       let sessionModule: string | undefined;
+      let renderCharts = true;
       for (let i = 0; i < rest.length; i++) {
         const a = rest[i]!;
         if (a === "-f" || a === "--connection-file") file = rest[++i];
@@ -38,6 +39,8 @@ async function main(argv: string[]): Promise<number> {
           const v = rest[++i];
           graceMs = Number(v);
           if (v === undefined || !Number.isFinite(graceMs) || graceMs < 0) throw new Error(`kernel: --interrupt-grace-ms expects milliseconds >= 0, got ${JSON.stringify(v ?? "")}`);
+        } else if (a === "--client-renders-charts") {
+          renderCharts = false;
         } else if (a === "--session-module") {
           sessionModule = rest[++i];
           if (!sessionModule) throw new Error("kernel: --session-module expects a module URL");
@@ -45,7 +48,7 @@ async function main(argv: string[]): Promise<number> {
       }
       if (!file) throw new Error("kernel: missing -f CONNECTION_FILE");
       const { runKernel } = await import("./main.js");
-      await runKernel({ connectionFile: file, inProcess, graceMs, sessionModule });
+      await runKernel({ connectionFile: file, inProcess, graceMs, sessionModule, renderCharts });
       return -1; // keep running: the kernel exits on shutdown_request
     }
     case "install": {

@@ -19,6 +19,11 @@ export interface KernelOptions {
   graceMs?: number;
   /** Module URL exporting createSession (default: the cell language; tests pass a scripted session). */
   sessionModule?: string;
+  /**
+   * Add SVG/PNG pictures to chart bundles (default true). The headless runner turns it off and renders
+   * in its own process, where the chart libraries load once for all notebooks.
+   */
+  renderCharts?: boolean;
   /** Latest start of the engine after the sockets are bound, ms (default 500). */
   engineStartMs?: number;
   /** How often to check that the parent process (JPY_PARENT_PID) is alive, ms (default 1000). */
@@ -93,7 +98,7 @@ export async function runKernel(options: KernelOptions): Promise<KernelHandle> {
   const engine = new LazyEngine(async () => {
     const { InProcessEngine, WorkerEngine } = await import("./engine/index.js");
     if (options.inProcess) return InProcessEngine.create(options.sessionModule ? (await import(options.sessionModule)).createSession : undefined);
-    return new WorkerEngine({ graceMs: options.graceMs, sessionModule: options.sessionModule, log });
+    return new WorkerEngine({ graceMs: options.graceMs, sessionModule: options.sessionModule, renderCharts: options.renderCharts, log });
   });
   const startEngine = () => void engine.start().catch((e: Error) => log(`the engine failed to start: ${e.stack ?? e.message}`));
   let fallback: NodeJS.Timeout | undefined;

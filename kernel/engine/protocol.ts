@@ -21,6 +21,6 @@ export interface WorkerData {
   flag: SharedArrayBuffer;
   /** Module URL exporting createSession (default: the cell language). */
   sessionModule: string;
-  /** Load the chart renderer when idle (default true). */
-  warmCharts?: boolean;
+  /** Add SVG/PNG pictures to chart bundles, and load the renderer when idle (default true). */
+  renderCharts?: boolean;
 }

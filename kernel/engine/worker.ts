@@ -32,7 +32,7 @@ function send(m: FromWorker): void {
 let chain: Promise<void> = Promise.resolve();
 let queued = 0;
 const post = (m: FromWorker) => {
-  if (queued === 0 && !needsFinishing(m)) return send(m);
+  if (queued === 0 && (data.renderCharts === false || !needsFinishing(m))) return send(m);
   queued++;
   chain = chain.then(async () => {
     try {
@@ -57,7 +57,7 @@ let warmed = false;
 let warmTimer: NodeJS.Timeout | undefined;
 const warmWhenIdle = () => {
   clearTimeout(warmTimer);
-  if (warmed || data.warmCharts === false) return;
+  if (warmed || data.renderCharts === false) return;
   warmTimer = setTimeout(() => {
     warmed = true;
     void warmRenderer();

@@ -13,6 +13,8 @@ export interface WorkerEngineOptions {
   graceMs?: number;
   /** Module URL exporting createSession (default: the cell language). */
   sessionModule?: string;
+  /** Add SVG/PNG pictures to chart bundles in the worker (default true). */
+  renderCharts?: boolean;
   log?: (line: string) => void;
 }
 
@@ -47,6 +49,7 @@ export class WorkerEngine implements Interpreter {
   private stopped = false;
   private readonly graceMs: number;
   private readonly sessionModule: string;
+  private readonly renderCharts: boolean;
   private readonly log: (line: string) => void;
   /** Number of workers started so far (1 + replacements). */
   generation = 0;
@@ -55,13 +58,14 @@ export class WorkerEngine implements Interpreter {
     this.graceMs = options.graceMs ?? 2000;
     if (!(this.graceMs >= 0)) throw new Error(`graceMs must be >= 0, got ${options.graceMs}`);
     this.sessionModule = options.sessionModule ?? DEFAULT_SESSION_MODULE;
+    this.renderCharts = options.renderCharts ?? true;
     this.log = options.log ?? (() => {});
     this.spawn();
   }
 
   private spawn(): void {
     this.generation++;
-    const data: WorkerData = { flag: this.flag.buffer as SharedArrayBuffer, sessionModule: this.sessionModule };
+    const data: WorkerData = { flag: this.flag.buffer as SharedArrayBuffer, sessionModule: this.sessionModule, renderCharts: this.renderCharts };
     // TypeScript sources (the test runner, or a test session module given to the compiled kernel):
     // register tsx inside the worker, then load the entry. Compiled builds with the language never load tsx.
     const worker =

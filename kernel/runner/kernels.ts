@@ -10,6 +10,7 @@ import { createServer } from "node:net";
 import { tmpdir } from "node:os";
 import { join } from "node:path";
 import { fileURLToPath } from "node:url";
+import { isPending, renderPending, type MimeBundle } from "../../lib/display/index.js";
 import { InProcessEngine, type EngineOutput, type RunResult } from "../engine/index.js";
 import { kernelInfoContent, IMPLEMENTATION_VERSION } from "../protocol/index.js";
 import { KernelClient, parseConnectionInfo, type ConnectionInfo } from "../wire/index.js";
@@ -55,6 +56,13 @@ async function waitUntilAnswering(client: KernelClient, timeoutMs: number) {
   throw new Error(`kernel not ready within ${timeoutMs} ms (${(lastError as Error)?.message ?? "no answer"})`);
 }
 
+/** Adds SVG/PNG to a chart bundle carried by an output message (display, update or result). */
+async function withPictures(content: Record<string, unknown>): Promise<Record<string, unknown>> {
+  const data = content.data as MimeBundle | undefined;
+  if (!data || typeof data !== "object" || !isPending(data)) return content;
+  return { ...content, data: await renderPending(data) };
+}
+
 const EXECUTE_TIMEOUT_MS = 24 * 3600 * 1000; // the runner's own --timeout governs cells
 
 export class ProcessKernel implements NotebookKernel {
@@ -71,7 +79,9 @@ export class ProcessKernel implements NotebookKernel {
     const dir = mkdtempSync(join(tmpdir(), "caloric-run-"));
     const file = join(dir, "connection.json");
     writeFileSync(file, JSON.stringify(info), { mode: 0o600 });
-    const child = spawn(process.execPath, [CLI, "kernel", "-f", file], { stdio: ["ignore", "ignore", "pipe"], env: { ...process.env, JPY_PARENT_PID: String(process.pid) } });
+    // The runner renders chart pictures itself: the chart libraries then load once in this process for
+    // all notebooks instead of once per kernel (about half a second of CPU each).
+    const child = spawn(process.execPath, [CLI, "kernel", "-f", file, "--client-renders-charts"], { stdio: ["ignore", "ignore", "pipe"], env: { ...process.env, JPY_PARENT_PID: String(process.pid) } });
     let err = "";
     child.stderr!.on("data", (d: Buffer) => (err = (err + d.toString()).slice(-20_000)));
     const client = await KernelClient.connect(info);
@@ -95,7 +105,7 @@ export class ProcessKernel implements NotebookKernel {
       throw new Error(`the kernel process has exited (${this.child.exitCode ?? this.child.signalCode}):\n${this.stderr()}`);
     }
     const { reply, iopub } = await this.client.execute(code, { store_history: true, stop_on_error: true }, EXECUTE_TIMEOUT_MS);
-    for (const m of iopub) onIopub({ msg_type: String(m.header.msg_type), content: m.content as Record<string, unknown> });
+    for (const m of iopub) onIopub({ msg_type: String(m.header.msg_type), content: await withPictures(m.content as Record<string, unknown>) });
     const c = reply.content as Record<string, unknown>;
     return { status: c.status as ExecuteReply["status"], execution_count: (c.execution_count as number) ?? null, ename: c.ename as string | undefined, evalue: c.evalue as string | undefined };
   }
@@ -137,36 +147,40 @@ export function engineOutputEvent(out: EngineOutput): IopubEvent {
 }
 
 /**
- * Hands out kernels one notebook at a time and starts the next one while the current notebook runs, so
- * with several notebooks the kernel start-up (process, worker, language) is mostly hidden.
+ * Hands out kernels one notebook at a time and keeps up to `ahead` more starting in the background
+ * while the current notebook runs, so with several notebooks the kernel start-up (process, worker,
+ * language) is mostly hidden behind the previous notebooks' cells.
  */
 export class KernelSupply {
-  private next: Promise<NotebookKernel> | undefined;
+  private readonly started: Promise<NotebookKernel>[] = [];
   private remaining: number;
 
   constructor(
     private readonly start: () => Promise<NotebookKernel>,
     count: number,
+    private readonly ahead = 2,
   ) {
     this.remaining = count;
   }
 
-  /** A ready (or starting) kernel; starts the following one in the background if more are needed. */
+  /** A ready (or starting) kernel; tops up the kernels starting in the background if more are needed. */
   acquire(): Promise<NotebookKernel> {
     if (this.remaining <= 0) throw new Error("KernelSupply: more kernels asked for than announced");
     this.remaining--;
-    const current = this.next ?? this.start();
-    this.next = this.remaining > 0 ? this.start() : undefined;
-    // A prestarted kernel that fails is reported when its notebook acquires it, not as an unhandled rejection.
-    this.next?.catch(() => undefined);
+    const current = this.started.shift() ?? this.start();
+    while (this.started.length < Math.min(this.ahead, this.remaining)) {
+      const next = this.start();
+      // A prestarted kernel that fails is reported when its notebook acquires it, not as an unhandled rejection.
+      next.catch(() => undefined);
+      this.started.push(next);
+    }
     return current;
   }
 
-  /** Closes a prestarted kernel nobody will use. */
+  /** Closes prestarted kernels nobody will use. */
   async dispose(): Promise<void> {
-    const spare = this.next;
-    this.next = undefined;
-    if (spare) await spare.then((k) => k.close()).catch(() => undefined);
+    const spare = this.started.splice(0);
+    await Promise.all(spare.map((p) => p.then((k) => k.close()).catch(() => undefined)));
   }
 }
 

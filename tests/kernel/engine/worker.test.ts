@@ -17,8 +17,8 @@ class Harness {
   readonly worker: Worker;
   private waiters: Array<() => void> = [];
   private nextId = 1;
-  constructor(sessionModule = FAKE) {
-    const data: WorkerData = { flag: this.flag.buffer as SharedArrayBuffer, sessionModule };
+  constructor(sessionModule = FAKE, extra: Partial<WorkerData> = {}) {
+    const data: WorkerData = { flag: this.flag.buffer as SharedArrayBuffer, sessionModule, ...extra };
     // The sources are TypeScript under the test runner: register tsx in the worker first (as the host does).
     this.worker = new Worker(`import("tsx/esm/api").then((m) => { m.register(); return import(${JSON.stringify(WORKER)}); })`, { eval: true, workerData: data });
     this.worker.on("message", (m: FromWorker) => {
@@ -105,6 +105,16 @@ describe("kernel/engine/worker", () => {
     const bundle = first.kind === "output" && first.output.kind === "display" ? first.output.bundle : {};
     expect(String((bundle as Record<string, unknown>)["image/svg+xml"])).toMatch(/^<svg/);
   }, 90_000);
+
+  it("worker with renderCharts false sends a chart without pictures, at once (the client renders them)", async () => {
+    h = new Harness(FAKE, { renderCharts: false });
+    const id = h.send({ op: "run", code: "chart" });
+    await h.until(isDone(id));
+    const first = h.of(id)[0]!;
+    const bundle = (first.kind === "output" && first.output.kind === "display" ? first.output.bundle : {}) as Record<string, unknown>;
+    expect(bundle["application/vnd.vegalite.v5+json"]).toBeDefined();
+    expect(bundle["image/svg+xml"]).toBeUndefined();
+  });
 
   it("worker reports a session that throws, or a value that cannot be sent, as fail and stays usable", async () => {
     h = new Harness();

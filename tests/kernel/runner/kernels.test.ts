@@ -32,7 +32,7 @@ describe("KernelSupply", () => {
   const fake = (id: number) => ({ id, closed: false, info: async () => ({ language_info: {}, implementation_version: "" }), execute: async () => ({ status: "ok" as const, execution_count: 1 }), interrupt: async () => {}, close: async function (this: { closed: boolean }) { this.closed = true; } });
   it("KernelSupply starts the next kernel when one is handed out, and no more than announced", async () => {
     let started = 0;
-    const supply = new KernelSupply(async () => fake(++started), 3);
+    const supply = new KernelSupply(async () => fake(++started), 3, 1);
     const first = await supply.acquire();
     expect(started).toBe(2); // the second is already starting while the first notebook runs
     await supply.acquire();
@@ -40,6 +40,17 @@ describe("KernelSupply", () => {
     expect(started).toBe(3);
     expect(() => supply.acquire()).toThrow(/more kernels asked for than announced/);
     expect((first as unknown as { id: number }).id).toBe(1);
+  });
+  it("KernelSupply keeps up to `ahead` kernels starting, never more than will be used", async () => {
+    let started = 0;
+    const supply = new KernelSupply(async () => fake(++started), 4, 2);
+    await supply.acquire();
+    expect(started).toBe(3); // this one and two ahead
+    await supply.acquire();
+    expect(started).toBe(4); // only one more is needed in all
+    await supply.acquire();
+    await supply.acquire();
+    expect(started).toBe(4);
   });
   it("KernelSupply.dispose closes a prestarted kernel nobody used", async () => {
     const made: ReturnType<typeof fake>[] = [];
