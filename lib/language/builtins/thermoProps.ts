@@ -44,6 +44,41 @@ function rootAt(m: unknown, T: number, P: number, ph: string, fn: string, ctx: B
   return { V: c.V, Z: c.residual.Z, notes: notesFor(d, T, P, c.phase, c.flags, undefined, false) };
 }
 
+/** m, T, V of the pressure-explicit built-ins: the model's data after T > 0 and V > 0 are checked. */
+function eosAtTV(m: unknown, T: number, V: number, fn: string, what: string): ModelData {
+  const d = eosOf(m, fn, what);
+  requireAbove0(fn, "T", T, "K");
+  requireAbove0(fn, "V", V, "m^3/mol");
+  return d;
+}
+
+/** Parameters (m, T, V) of the pressure-explicit built-ins. */
+const TV_PARAMS = (modelDoc: string) => [
+  { name: "m", type: "model", doc: modelDoc },
+  { name: "T", type: "quantity", dim: "temperature", doc: "temperature" },
+  { name: "V", type: "quantity", dim: "molar_volume", doc: "molar volume" },
+] as const;
+
+/** Parameters (m, T, P, phase) of the built-ins that pick a volume root. */
+const TP_PHASE_PARAMS = [
+  { name: "m", type: "model", doc: "a model" },
+  { name: "T", type: "quantity", doc: "temperature (or a span of them)" },
+  { name: "P", type: "quantity", doc: "pressure (or a span of them)" },
+  PHASE_PARAM,
+] as const;
+
+/** impl of a built-in that returns one number of the chosen root at T, P (vectorised over spans). */
+function atRoot(fn: string, returns: string, pick: (r: { V: number; Z: number }) => number): BuiltinDef["impl"] {
+  return ({ m, T, P, phase }, ctx) => {
+    const ph = phaseArg(phase, fn, ctx) ?? "stable";
+    const inputs = { T: si(T, "temperature", "T", fn, ctx), P: si(P, "pressure", "P", fn, ctx) };
+    return propertyCall(fn, inputs, returns, (a) => {
+      const r = rootAt(m, a.T!, a.P!, ph, fn, ctx);
+      return { value: pick(r), notes: r.notes };
+    }, ctx);
+  };
+}
+
 /** Quantity or array argument -> SI (the property built-ins vectorise themselves to show each caution once). */
 const si = (v: unknown, dim: string, name: string, fn: string, ctx: BuiltinContext) => siArg(v, dim, name, fn, ctx);
 
@@ -57,20 +92,14 @@ export const thermoProps: BuiltinDef[] = [
   defineBuiltin({
     name: "pressure",
     group: "thermo",
-    params: [
-      { name: "m", type: "model", doc: "a pressure-explicit model (cubic, virial, ideal gas)" },
-      { name: "T", type: "quantity", dim: "temperature", doc: "temperature" },
-      { name: "V", type: "quantity", dim: "molar_volume", doc: "molar volume" },
-    ],
+    params: TV_PARAMS("a pressure-explicit model (cubic, virial, ideal gas)"),
     returns: "pressure",
     doc: "Pressure from the equation of state P(T, V).",
     method: "The model's P(T, V) directly (no root finding).",
     examples: ['pressure(vdw("carbon dioxide"), 300 K, 0.5 L/mol)'],
     vectorize: true,
     impl: ({ m, T, V }) => {
-      const d = eosOf(m, "pressure", "P(T, V)");
-      requireAbove0("pressure", "T", T, "K");
-      requireAbove0("pressure", "V", V, "m^3/mol");
+      const d = eosAtTV(m, T, V, "pressure", "P(T, V)");
       if (typeof d.eos!.pressure !== "function") throw new ArgumentError(`argument m of pressure(): ${d.label} is not explicit in pressure; use volume(m, T, P)`);
       return guard("pressure", () => d.eos!.pressure!(T, V));
     },
@@ -78,64 +107,34 @@ export const thermoProps: BuiltinDef[] = [
   defineBuiltin({
     name: "volume",
     group: "thermo",
-    params: [
-      { name: "m", type: "model", doc: "a model" },
-      { name: "T", type: "quantity", doc: "temperature (or a span of them)" },
-      { name: "P", type: "quantity", doc: "pressure (or a span of them)" },
-      PHASE_PARAM,
-    ],
+    params: TP_PHASE_PARAMS,
     returns: "molar_volume",
     doc: "Molar volume at T, P: the stable root (lowest Gibbs energy), or the liquid or vapour root on request.",
     method: "All real roots of the equation of state; the middle (unstable) root of three is never returned.",
     examples: ['volume(pr("n-butane"), 350 K, 9.4573 bar, "liquid")', 'volume(pr("n-butane"), 350 K, 9.4573 bar, {phase: "vapor"})', 'volume(if97(), 300 K, 1 bar)'],
-    impl: ({ m, T, P, phase }, ctx) => {
-      const ph = phaseArg(phase, "volume", ctx) ?? "stable";
-      const inputs = { T: si(T, "temperature", "T", "volume", ctx), P: si(P, "pressure", "P", "volume", ctx) };
-      return propertyCall("volume", inputs, "molar_volume", (a) => {
-        const r = rootAt(m, a.T!, a.P!, ph, "volume", ctx);
-        return { value: r.V, notes: r.notes };
-      }, ctx);
-    },
+    impl: atRoot("volume", "molar_volume", (r) => r.V),
   }),
   defineBuiltin({
     name: "zfactor",
     group: "thermo",
-    params: [
-      { name: "m", type: "model", doc: "a model" },
-      { name: "T", type: "quantity", doc: "temperature (or a span of them)" },
-      { name: "P", type: "quantity", doc: "pressure (or a span of them)" },
-      PHASE_PARAM,
-    ],
+    params: TP_PHASE_PARAMS,
     returns: "dimensionless",
     doc: "Compressibility factor Z = P V / (R T) at T, P (stable root unless a phase is asked).",
     method: "Z of the chosen volume root.",
     examples: ['zfactor(pr("methane"), 250 K, 60 bar)', 'zfactor(lk("propane"), span(350 K, 450 K, 3), 20 bar)'],
-    impl: ({ m, T, P, phase }, ctx) => {
-      const ph = phaseArg(phase, "zfactor", ctx) ?? "stable";
-      const inputs = { T: si(T, "temperature", "T", "zfactor", ctx), P: si(P, "pressure", "P", "zfactor", ctx) };
-      return propertyCall("zfactor", inputs, "dimensionless", (a) => {
-        const r = rootAt(m, a.T!, a.P!, ph, "zfactor", ctx);
-        return { value: r.Z, notes: r.notes };
-      }, ctx);
-    },
+    impl: atRoot("zfactor", "dimensionless", (r) => r.Z),
   }),
   defineBuiltin({
     name: "internal_pressure",
     group: "thermo",
-    params: [
-      { name: "m", type: "model", doc: "a pressure-explicit model" },
-      { name: "T", type: "quantity", dim: "temperature", doc: "temperature" },
-      { name: "V", type: "quantity", dim: "molar_volume", doc: "molar volume" },
-    ],
+    params: TV_PARAMS("a pressure-explicit model"),
     returns: "pressure",
     doc: "Internal pressure (dU/dV)_T = T (dP/dT)_V - P: zero for an ideal gas, a/V^2 for van der Waals.",
     method: "Numerical (Richardson-extrapolated) temperature derivative of P(T, V) with the ideal part removed first.",
     examples: ['internal_pressure(vdw("nitrogen"), 300 K, 1 L/mol)'],
     vectorize: true,
     impl: ({ m, T, V }) => {
-      const d = eosOf(m, "internal_pressure", "(dU/dV)_T");
-      requireAbove0("internal_pressure", "T", T, "K");
-      requireAbove0("internal_pressure", "V", V, "m^3/mol");
+      const d = eosAtTV(m, T, V, "internal_pressure", "(dU/dV)_T");
       return guard("internal_pressure", () => internalPressure(d.eos!, T, V));
     },
   }),
