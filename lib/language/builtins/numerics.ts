@@ -55,6 +55,12 @@ function axisOf(fn: string, args: [string, unknown][], ctx: BuiltinContext): Axi
   return { unit, shown: ref.formatUnits(), si, quantity: (x) => ctx.units.fromSI(x, unit) };
 }
 
+/** Two bounds on one x axis, as SI numbers (the axis comes from whichever bound has a unit). */
+function boundsOf(fn: string, [nameA, a]: [string, unknown], [nameB, b]: [string, unknown], ctx: BuiltinContext): { axis: Axis; lo: number; hi: number } {
+  const axis = axisOf(fn, [[nameA, a], [nameB, b]], ctx);
+  return { axis, lo: axis.si(a, nameA), hi: axis.si(b, nameB) };
+}
+
 /** f as a plain SI function: probes once at x0 to learn the output unit, then converts each call. */
 function plainFunction(fn: string, f: unknown, axis: Axis, x0: number, ctx: BuiltinContext): { g: (x: number) => number; yUnit: string; yShown: string } {
   const probe = ctx.call(f, axis.quantity(x0));
@@ -91,14 +97,18 @@ function combine(value: number, a: string, b: string, op: "*" | "/", ctx: Builti
   return (ctx.units.fromSI(value, a) as Unit).multiply(x);
 }
 
-/** Reads an options record of plain numbers (and booleans), naming unknown keys. */
-function optionsOf(fn: string, rec: unknown, allowed: readonly string[]): Record<string, unknown> {
+/**
+ * Reads an options record of plain numbers (and booleans), naming unknown keys. `xKey` names the one
+ * option measured like x (a step or a tolerance): given as a quantity, it is converted on `axis`.
+ */
+function optionsOf(fn: string, rec: unknown, allowed: readonly string[], axis?: Axis, xKey?: string): Record<string, unknown> {
   if (rec === undefined) return {};
   const out: Record<string, unknown> = {};
   for (const [k, v] of Object.entries(rec as Record<string, unknown>)) {
     if (!allowed.includes(k)) throw new ArgumentError(`argument options of ${fn}() has an unknown key "${k}"; valid keys: ${allowed.join(", ")}`);
     out[k] = v;
   }
+  if (axis && xKey && isUnit(out[xKey])) out[xKey] = axis.si(out[xKey], `options.${xKey}`);
   return out;
 }
 
@@ -169,9 +179,7 @@ export const numerics: BuiltinDef[] = [
     source: "QUADPACK (Piessens et al., 1983) rule constants and error estimate",
     examples: ["integrate(f(x) = x^2, 0, 3)", "integrate(f(V) = 1 / V^2 * 1 m^6, 1 m^3, Infinity)", "integrate(f(P) = 8.314 J/(mol K) * 300 K / P, 1 bar, 10 bar, {rel: 1e-12})"],
     impl: ({ f, a, b, options }, ctx) => {
-      const axis = axisOf("integrate", [["a", a], ["b", b]], ctx);
-      const lo = axis.si(a, "a");
-      const hi = axis.si(b, "b");
+      const { axis, lo, hi } = boundsOf("integrate", ["a", a], ["b", b], ctx);
       const opts = optionsOf("integrate", options, ["rel", "abs", "maxEval"]);
       const { g, yUnit } = plainFunction("integrate", f, axis, probePoint(lo, hi), ctx);
       if (isUnit(opts.abs)) opts.abs = (opts.abs as Unit).toSI().toNumber();
@@ -194,14 +202,11 @@ export const numerics: BuiltinDef[] = [
     source: "R. P. Brent, Algorithms for Minimization without Derivatives (1973), ch. 4",
     examples: ["seek(f(x) = x^2 - 2, 0, 2)", "seek(f(T) = T - 300 K, 250 K, 350 K)", "seek(f(x) = exp(x) - 1e6, 0, 1, {expand: true})"],
     impl: ({ f, lo, hi, options }, ctx) => {
-      const axis = axisOf("seek", [["lo", lo], ["hi", hi]], ctx);
-      const l = axis.si(lo, "lo");
-      const h = axis.si(hi, "hi");
+      const { axis, lo: l, hi: h } = boundsOf("seek", ["lo", lo], ["hi", hi], ctx);
       for (const [name, v] of [["lo", l], ["hi", h]] as const) {
         if (!Number.isFinite(v)) throw new ArgumentError(`argument ${name} of seek() must be finite, got ${v}`);
       }
-      const opts = optionsOf("seek", options, ["expand", "rtol", "xtol", "maxIter"]);
-      if (isUnit(opts.xtol)) opts.xtol = axis.si(opts.xtol, "options.xtol");
+      const opts = optionsOf("seek", options, ["expand", "rtol", "xtol", "maxIter"], axis, "xtol");
       const { g, yUnit, yShown } = plainFunction("seek", f, axis, l, ctx);
       const show = (x: number, unit: string, shown: string) => (unit === "" ? String(Number(x.toPrecision(6))) : ctx.textOf((ctx.units.fromSI(x, unit) as Unit).to(shown)));
       // An estimate within 1e-9 of the bracket width from 0 is shown as 0 (a pole at 0 stalls at -1e-150).
@@ -252,8 +257,7 @@ export const numerics: BuiltinDef[] = [
       const axis = axisOf("slope", [["x", x]], ctx);
       const x0 = axis.si(x, "x");
       if (!Number.isFinite(x0)) throw new ArgumentError(`argument x of slope() must be finite, got ${x0}`);
-      const opts = optionsOf("slope", options, ["h", "order"]);
-      if (isUnit(opts.h)) opts.h = axis.si(opts.h, "options.h");
+      const opts = optionsOf("slope", options, ["h", "order"], axis, "h");
       const { g, yUnit } = plainFunction("slope", f, axis, x0, ctx);
       const r = guarded("slope", ctx, () => derivative(g, x0, { ...opts, shouldStop: ctx.shouldStop }));
       return combine(r.value, yUnit, axis.unit, "/", ctx, opts.order === 2 ? 2 : 1);
