@@ -88,6 +88,33 @@ function saturationNotes(d: ModelData, T: number, P: number): string[] {
   return notesFor(d, T, P, "two-phase", flags, undefined, false);
 }
 
+/** One side of the saturation curve: psat reads T and gives P, tsat reads P and gives T. */
+interface SaturationSide {
+  fn: "psat" | "tsat";
+  given: "T" | "P";
+  dim: "temperature" | "pressure";
+  unit: "K" | "Pa";
+  returns: "pressure" | "temperature";
+  if97: (x: number) => number;
+  /** The saturation point (T, P) from the given coordinate by the model, with its range checks. */
+  eos: (d: ModelData, x: number) => { T: number; P: number };
+}
+
+/** impl of psat/tsat: IF97 region 4 for if97(), else the model's equal-fugacity solve with its cautions. */
+function saturationImpl(side: SaturationSide): BuiltinDef["impl"] {
+  const { fn, given } = side;
+  return (args, ctx) => {
+    const d = modelDataOf(args.m)!;
+    return propertyCall(fn, { [given]: si(args[given], side.dim, given, fn, ctx) }, side.returns, (a) => {
+      const x = a[given]!;
+      requireAbove0(fn, given, x, side.unit);
+      if (d.id === "if97") return { value: guard(fn, () => side.if97(x), rename) };
+      const pt = side.eos(d, x);
+      return { value: given === "T" ? pt.P : pt.T, notes: saturationNotes(d, pt.T, pt.P) };
+    }, ctx);
+  };
+}
+
 export const thermoProps: BuiltinDef[] = [
   defineBuiltin({
     name: "pressure",
@@ -149,16 +176,13 @@ export const thermoProps: BuiltinDef[] = [
     doc: "Saturation (vapour) pressure at T.",
     method: "Equation of state: equal fugacity of the liquid and vapour roots (Newton on ln P from Wilson's estimate). if97(): the IF97 region 4 saturation equation.",
     examples: ['psat(pr("propane"), 300 K)', "psat(if97(), 100 degC)"],
-    impl: ({ m, T }, ctx) => {
-      const d = modelDataOf(m)!;
-      return propertyCall("psat", { T: si(T, "temperature", "T", "psat", ctx) }, "pressure", ({ T: t }) => {
-        requireAbove0("psat", "T", t!, "K");
-        if (d.id === "if97") return { value: guard("psat", () => if97Psat(t!), rename) };
-        guard("psat", () => requireSaturationT(d.eos!, t!));
-        const P = guard("psat", () => thermoPsat(d.eos!, t!).P, { model: "m" });
-        return { value: P, notes: saturationNotes(d, t!, P) };
-      }, ctx);
-    },
+    impl: saturationImpl({
+      fn: "psat", given: "T", dim: "temperature", unit: "K", returns: "pressure", if97: if97Psat,
+      eos: (d, T) => {
+        guard("psat", () => requireSaturationT(d.eos!, T));
+        return { T, P: guard("psat", () => thermoPsat(d.eos!, T).P, { model: "m" }) };
+      },
+    }),
   }),
   defineBuiltin({
     name: "tsat",
@@ -171,16 +195,14 @@ export const thermoProps: BuiltinDef[] = [
     doc: "Saturation temperature at P (boiling point at that pressure).",
     method: "Equation of state: equal fugacity, Newton on T with the Clausius-Clapeyron slope. if97(): the IF97 region 4 backward saturation equation.",
     examples: ['tsat(pr("propane"), 10 bar)', "tsat(if97(), 1 atm)"],
-    impl: ({ m, P }, ctx) => {
-      const d = modelDataOf(m)!;
-      return propertyCall("tsat", { P: si(P, "pressure", "P", "tsat", ctx) }, "temperature", ({ P: p }) => {
-        requireAbove0("tsat", "P", p!, "Pa");
-        if (d.id === "if97") return { value: guard("tsat", () => if97Tsat(p!), rename) };
-        guard("tsat", () => requireSaturationP(d.eos!, p!));
-        const T = guard("tsat", () => thermoTsat(d.eos!, p!).T, { model: "m" });
-        guard("tsat", () => requireSaturationP(d.eos!, p!, T));
-        return { value: T, notes: saturationNotes(d, T, p!) };
-      }, ctx);
-    },
+    impl: saturationImpl({
+      fn: "tsat", given: "P", dim: "pressure", unit: "Pa", returns: "temperature", if97: if97Tsat,
+      eos: (d, P) => {
+        guard("tsat", () => requireSaturationP(d.eos!, P));
+        const T = guard("tsat", () => thermoTsat(d.eos!, P).T, { model: "m" });
+        guard("tsat", () => requireSaturationP(d.eos!, P, T));
+        return { T, P };
+      },
+    }),
   }),
 ];
