@@ -2,16 +2,10 @@ import { describe, expect, it } from "vitest";
 import type { Unit } from "mathjs";
 import { createSession } from "../../../../lib/language/index.js";
 import { createSessionWithInternals } from "../../../../lib/language/createSession.js";
+import { languageSession } from "../../../support/languageSession.js";
 import { probePoint } from "../../../../lib/language/builtins/numerics.js";
 
-const { session, internals } = createSessionWithInternals({ shouldStop: () => false });
-const sink = { stdout() {}, display() {}, clear() {} };
-const value = (code: string): unknown => {
-  const r = session.run(`__v = ${code};`, sink);
-  if (!r.ok) throw new Error(r.error.evalue);
-  return internals.scope.get("__v");
-};
-const si = (code: string, unit: string): number => (value(code) as Unit).toNumber(unit);
+const { sink, value, num: si } = languageSession();
 const errorOf = (code: string, shouldStop = () => false) => {
   const r = createSession({ shouldStop }).run(code, sink);
   return r.ok ? "" : r.error.evalue;

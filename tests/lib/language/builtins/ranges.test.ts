@@ -1,14 +1,9 @@
 import { describe, expect, it } from "vitest";
 import { createSession } from "../../../../lib/language/index.js";
-import { createSessionWithInternals } from "../../../../lib/language/createSession.js";
+import { languageSession } from "../../../support/languageSession.js";
 import { isQuantityColumn } from "../../../../lib/language/values/column.js";
 
-const { session, internals } = createSessionWithInternals({ shouldStop: () => false });
-const value = (code: string): unknown => {
-  const r = session.run(`__v = ${code};`, { stdout() {}, display() {}, clear() {} });
-  if (!r.ok) throw new Error(r.error.evalue);
-  return internals.scope.get("__v");
-};
+const { value } = languageSession();
 const errorOf = (code: string) => {
   const r = createSession({ shouldStop: () => false }).run(code, { stdout() {}, display() {}, clear() {} });
   return r.ok ? "" : r.error.evalue;

@@ -1,25 +1,9 @@
 import { describe, expect, it } from "vitest";
 import type { Unit } from "mathjs";
-import { createSessionWithInternals } from "../../../../lib/language/createSession.js";
+import { languageSession } from "../../../support/languageSession.js";
 
 const out: string[] = [];
-const { session, internals } = createSessionWithInternals({ shouldStop: () => false });
-const sink = { stdout: (t: string) => { out.push(t); }, display() {}, clear() {} };
-const value = (code: string): unknown => {
-  const r = session.run(`__v = ${code};`, sink);
-  if (!r.ok) throw new Error(r.error.evalue);
-  return internals.scope.get("__v");
-};
-const num = (code: string, unit: string): number => (value(code) as Unit).toNumber(unit);
-const text = (code: string): string => {
-  const r = session.run(code, sink);
-  if (!r.ok) throw new Error(r.error.evalue);
-  return String(r.result?.["text/plain"] ?? "");
-};
-const errorOf = (code: string): string => {
-  const r = session.run(code, sink);
-  return r.ok ? "" : r.error.evalue;
-};
+const { session, sink, value, num, text, errorOf } = languageSession({ stdout: (t: string) => { out.push(t); }, display() {}, clear() {} });
 
 describe("substance", () => {
   it("substance(\"methane\") shows a two-column table with its source, and fields read as quantities", () => {

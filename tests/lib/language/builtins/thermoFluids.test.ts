@@ -1,14 +1,8 @@
 import { describe, expect, it } from "vitest";
-import { createSessionWithInternals } from "../../../../lib/language/createSession.js";
+import { languageSession } from "../../../support/languageSession.js";
 import { thermoDataOf } from "../../../../lib/language/values/thermo.js";
 
-const { session, internals } = createSessionWithInternals({ shouldStop: () => false });
-const sink = { stdout() {}, display() {}, clear() {} };
-const value = (code: string): unknown => {
-  const r = session.run(`__v = ${code};`, sink);
-  if (!r.ok) throw new Error(r.error.evalue);
-  return internals.scope.get("__v");
-};
+const { session, sink, value, errorOf } = languageSession();
 
 describe("substanceValue", () => {
   it("substanceValue carries the databank record in SI underneath the displayed quantities", () => {
@@ -52,10 +46,6 @@ describe("resolveSubstance", () => {
 });
 
 describe("mixtureValue (QA issue 5: kij forms, validation, pseudo-components)", () => {
-  const errorOf = (code: string): string => {
-    const r = session.run(code, sink);
-    return r.ok ? "" : r.error.evalue;
-  };
   it("mixtureValue: a kij record that names no pair is an error naming argument kij and the accepted forms (item 15)", () => {
     const e = errorOf("mixture({methane: 0.5, CO2: 0.5}, {ki: 0.1})");
     expect(e).toMatch(/^argument kij of mixture\(\): key "ki" must name two different components .*accepted forms: a record of pairs \{"methane\/carbon dioxide": 0\.1\}.*symmetric n x n matrix/);

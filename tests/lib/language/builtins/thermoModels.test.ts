@@ -1,15 +1,10 @@
 import { describe, expect, it } from "vitest";
 import { idealGasPart } from "../../../../lib/language/builtins/thermoModels.js";
-import { createSessionWithInternals } from "../../../../lib/language/createSession.js";
+import { languageSession } from "../../../support/languageSession.js";
 import { modelDataOf } from "../../../../lib/language/values/thermo.js";
 import { DEFAULT_REFERENCE, getSubstance, pseudoComponent } from "../../../../lib/thermo/index.js";
 
-const { session, internals } = createSessionWithInternals({ shouldStop: () => false });
-const value = (code: string): unknown => {
-  const r = session.run(`__v = ${code};`, { stdout() {}, display() {}, clear() {} });
-  if (!r.ok) throw new Error(r.error.evalue);
-  return internals.scope.get("__v");
-};
+const { value } = languageSession();
 
 describe("idealGasPart", () => {
   it("idealGasPart: H is 0 at the reference T and S is 0 at the reference T and P (DEFAULT_REFERENCE: 298.15 K, 1 bar)", () => {

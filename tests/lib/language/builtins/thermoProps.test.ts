@@ -1,22 +1,9 @@
 import { describe, expect, it } from "vitest";
-import type { Unit } from "mathjs";
-import { createSessionWithInternals } from "../../../../lib/language/createSession.js";
+import { languageSession, rel } from "../../../support/languageSession.js";
 import { isQuantityColumn } from "../../../../lib/language/values/column.js";
 import { getSubstance, psat as libPsat, pr, pureFluid, vdw } from "../../../../lib/thermo/index.js";
 
-const { session, internals } = createSessionWithInternals({ shouldStop: () => false });
-const sink = { stdout() {}, display() {}, clear() {} };
-const value = (code: string): unknown => {
-  const r = session.run(`__v = ${code};`, sink);
-  if (!r.ok) throw new Error(r.error.evalue);
-  return internals.scope.get("__v");
-};
-const num = (code: string, unit: string): number => (value(code) as Unit).toNumber(unit);
-const errorOf = (code: string): string => {
-  const r = session.run(code, sink);
-  return r.ok ? "" : r.error.evalue;
-};
-const rel = (a: number, b: number) => Math.abs(a / b - 1);
+const { session, sink, value, num, errorOf } = languageSession();
 
 describe("volume and zfactor of if97() at saturation", () => {
   it("volume/zfactor(if97(), Tsat, P, phase) asked for the phase IF97 does not give there suggest state(if97(), {P, x}).V or .Z", () => {

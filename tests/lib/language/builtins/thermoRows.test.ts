@@ -1,15 +1,10 @@
 import { describe, expect, it } from "vitest";
 import { STATE_FIELDS, columnsOf, eosRowAt, fastEosColumns, identity, recordOf } from "../../../../lib/language/builtins/thermoRows.js";
-import { createSessionWithInternals } from "../../../../lib/language/createSession.js";
+import { languageSession } from "../../../support/languageSession.js";
 import { isQuantityColumn } from "../../../../lib/language/values/column.js";
 import { modelDataOf } from "../../../../lib/language/values/thermo.js";
 
-const { session, internals } = createSessionWithInternals({ shouldStop: () => false });
-const value = (code: string): unknown => {
-  const r = session.run(`__v = ${code};`, { stdout() {}, display() {}, clear() {} });
-  if (!r.ok) throw new Error(r.error.evalue);
-  return internals.scope.get("__v");
-};
+const { internals, value } = languageSession();
 
 describe("STATE_FIELDS", () => {
   it("STATE_FIELDS uses the DESIGN.md symbols: upper case molar, lower case specific", () => {

@@ -1,24 +1,12 @@
 import { describe, expect, it } from "vitest";
 import type { Unit } from "mathjs";
-import { createSessionWithInternals } from "../../../../lib/language/createSession.js";
+import { languageSession, rel } from "../../../support/languageSession.js";
 import { isQuantityColumn } from "../../../../lib/language/values/column.js";
 import {
   getSubstance, heatCapacity, idealGasFunctions, pr as prModel, psat as libPsat, pureFluid, state as thermoState, departure as thermoDeparture,
 } from "../../../../lib/thermo/index.js";
 
-const { session, internals } = createSessionWithInternals({ shouldStop: () => false });
-const sink = { stdout() {}, display() {}, clear() {} };
-const value = (code: string): unknown => {
-  const r = session.run(`__v = ${code};`, sink);
-  if (!r.ok) throw new Error(r.error.evalue);
-  return internals.scope.get("__v");
-};
-const num = (code: string, unit: string): number => (value(code) as Unit).toNumber(unit);
-const errorOf = (code: string): string => {
-  const r = session.run(code, sink);
-  return r.ok ? "" : r.error.evalue;
-};
-const rel = (a: number, b: number) => Math.abs(a / b - 1);
+const { session, sink, value, num, errorOf } = languageSession();
 session.run('m = pr("propane"); b = pr("n-butane"); s = state(m, 350 K, 10 bar);', sink);
 
 describe("state", () => {
