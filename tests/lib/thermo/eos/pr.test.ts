@@ -1,25 +1,17 @@
 import { describe, expect, it } from "vitest";
 import { pr } from "../../../../lib/thermo/eos/pr.js";
 import { pureFluid } from "../../../../lib/thermo/eos/fluid.js";
-import { R } from "../../../../lib/thermo/constants.js";
+import { expectCriticalPointAt, expectNamedModel } from "../../../support/cubicChecks.js";
 import { propane } from "../fixtures.js";
 
 describe("pr", () => {
   it("pr puts its critical point at Tc, Pc with the published Zc", () => {
     // Peng-Robinson: Zc = 0.30740 (Peng & Robinson 1976; SVNA 7th ed. Table 3.1). At Tc and Pc the three roots merge: the polished roots all lie within 1e-4 of Vc.
-    const m = pr(pureFluid(propane));
-    const Vc = (m.parameters.Zc * R * propane.Tc) / propane.Pc;
-    expect(Math.abs(m.parameters.Zc - 0.3074013)).toBeLessThan(1e-6);
-    for (const V of m.volumes(propane.Tc, propane.Pc)) expect(Math.abs(V / Vc - 1)).toBeLessThan(1e-4);
-    // dP/dV = 0 at the critical volume (central difference, 1e-6 relative step).
-    const h = Vc * 1e-6;
-    const slope = (m.pressure(propane.Tc, Vc + h) - m.pressure(propane.Tc, Vc - h)) / (2 * h);
-    expect(Math.abs(slope * Vc / propane.Pc)).toBeLessThan(1e-6);
+    // dP/dV = 0 at the critical volume (central difference, 1e-6 relative step): checked by expectCriticalPointAt.
+    expectCriticalPointAt(pr(pureFluid(propane)), propane, 0.3074013);
   });
   it("pr names its model and source", () => {
-    const m = pr(pureFluid(propane));
-    expect(m.id).toBe("pr");
-    expect(m.source.length).toBeGreaterThan(10);
+    expectNamedModel(pr(pureFluid(propane)), "pr");
   });
 });
 
