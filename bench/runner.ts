@@ -13,12 +13,11 @@
 import { spawn, spawnSync } from "node:child_process";
 import { randomUUID } from "node:crypto";
 import { existsSync, mkdirSync, mkdtempSync, readdirSync, readFileSync, rmSync, writeFileSync } from "node:fs";
-import { createServer } from "node:net";
 import { loadavg, tmpdir } from "node:os";
 import { dirname, join } from "node:path";
 import { fileURLToPath, pathToFileURL } from "node:url";
 import { InProcessEngine } from "../kernel/engine/index.js";
-import { KernelClient, parseConnectionInfo } from "../kernel/wire/index.js";
+import { KernelClient, loopbackConnection } from "../kernel/wire/index.js";
 
 const here = dirname(fileURLToPath(import.meta.url));
 // dist/bench/runner.js or bench/runner.ts: the repo root is the nearest parent holding package.json.
@@ -61,15 +60,6 @@ function timed(cmd: string, args: string[], env: NodeJS.ProcessEnv): Timed {
   return { ms, status: r.status, tail: `${r.stdout ?? ""}${r.stderr ?? ""}`.trim().split("\n").slice(-3).join(" | ") };
 }
 
-async function freePort(): Promise<number> {
-  return new Promise((ok, fail) => {
-    const s = createServer().once("error", fail).listen(0, "127.0.0.1", () => {
-      const port = (s.address() as { port: number }).port;
-      s.close(() => ok(port));
-    });
-  });
-}
-
 const codeCellsOf = (file: string): string[] =>
   (JSON.parse(readFileSync(file, "utf8")) as { cells: { cell_type: string; source: string | string[] }[] }).cells
     .filter((c) => c.cell_type === "code")
@@ -86,10 +76,7 @@ async function profileProcess(files: string[], tmp: string): Promise<{ phases: [
   const phases: [string, number][] = [];
   const cells: CellTime[] = [];
   for (const file of files) {
-    const ports = new Set<number>();
-    while (ports.size < 5) ports.add(await freePort());
-    const [shell_port, iopub_port, stdin_port, control_port, hb_port] = [...ports] as [number, number, number, number, number];
-    const info = parseConnectionInfo({ transport: "tcp", ip: "127.0.0.1", shell_port, iopub_port, stdin_port, control_port, hb_port, key: randomUUID(), signature_scheme: "hmac-sha256", kernel_name: "caloric" });
+    const info = await loopbackConnection();
     const conn = join(tmp, `conn-${randomUUID()}.json`);
     writeFileSync(conn, JSON.stringify(info));
     const name = file.split("/").at(-1)!;

@@ -4,38 +4,18 @@
  * but a runaway cell can only be stopped cooperatively).
  */
 import { spawn, type ChildProcess } from "node:child_process";
-import { randomUUID } from "node:crypto";
 import { mkdtempSync, rmSync, writeFileSync } from "node:fs";
-import { createServer } from "node:net";
 import { tmpdir } from "node:os";
 import { join } from "node:path";
 import { fileURLToPath } from "node:url";
 import { isPending, renderPending, type MimeBundle } from "../../lib/display/index.js";
 import { InProcessEngine, type EngineOutput, type RunResult } from "../engine/index.js";
 import { kernelInfoContent, IMPLEMENTATION_VERSION } from "../protocol/index.js";
-import { KernelClient, parseConnectionInfo, type ConnectionInfo } from "../wire/index.js";
+import { KernelClient, loopbackConnection } from "../wire/index.js";
 import type { ExecuteReply, NotebookKernel } from "./execute.js";
 import type { IopubEvent } from "./outputs.js";
 
 const CLI = fileURLToPath(new URL("../cli.js", import.meta.url));
-
-async function freePort(): Promise<number> {
-  return new Promise((ok, fail) => {
-    const s = createServer()
-      .once("error", fail)
-      .listen(0, "127.0.0.1", () => {
-        const port = (s.address() as { port: number }).port;
-        s.close(() => ok(port));
-      });
-  });
-}
-
-async function loopbackConnection(): Promise<ConnectionInfo> {
-  const ports = new Set<number>();
-  while (ports.size < 5) ports.add(await freePort());
-  const [shell_port, iopub_port, stdin_port, control_port, hb_port] = [...ports] as [number, number, number, number, number];
-  return parseConnectionInfo({ transport: "tcp", ip: "127.0.0.1", shell_port, iopub_port, stdin_port, control_port, hb_port, key: randomUUID(), signature_scheme: "hmac-sha256", kernel_name: "caloric" });
-}
 
 /**
  * Sends kernel_info until one is answered with its reply and idle status. The IOPub subscription joins

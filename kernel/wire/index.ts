@@ -1,5 +1,6 @@
 /** kernel/wire: the only importer of zeromq. Frames, signatures, replay, send queues, heartbeat, a client. */
 export { readConnectionFile, parseConnectionInfo, endpoint, type ConnectionInfo, type ChannelName } from "./connection.js";
+export { freePort, loopbackConnection } from "./loopback.js";
 export { createSigner, type Signer } from "./signer.js";
 export { ReplayGuard } from "./replay.js";
 export { encode, decode, DELIMITER, type WireMessage, type Json, type DecodeResult } from "./codec.js";

@@ -16,7 +16,8 @@ import { KernelManager, ServerConnection, type Kernel, type KernelMessage } from
 import WebSocket from "ws";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { jupyterEnv } from "../support/jupyterEnv.js";
-import { CLI, freePort } from "../support/kernelProcess.js";
+import { freePort } from "../../kernel/wire/index.js";
+import { CLI } from "../support/kernelProcess.js";
 
 // A cell that runs for many seconds and polls the interrupt flag all along: 3e6 Peng-Robinson Z
 // solutions in one vectorised call (the built-in polls every 256 points; about 6 s per 1e6 here).

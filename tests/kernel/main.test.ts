@@ -12,8 +12,8 @@ import { join } from "node:path";
 import { pathToFileURL } from "node:url";
 import { afterEach, describe, expect, it } from "vitest";
 import { runKernel, type KernelHandle, type KernelOptions } from "../../kernel/main.js";
-import { KernelClient } from "../../kernel/wire/index.js";
-import { connectionInfo, REPO_ROOT } from "../support/kernelProcess.js";
+import { KernelClient, loopbackConnection } from "../../kernel/wire/index.js";
+import { REPO_ROOT } from "../support/kernelProcess.js";
 
 const FAKE = new URL("../support/fakeSession.ts", import.meta.url).href;
 
@@ -25,7 +25,7 @@ interface Started {
 }
 
 async function start(options: Partial<KernelOptions> = {}): Promise<Started> {
-  const info = await connectionInfo();
+  const info = await loopbackConnection();
   const file = join(mkdtempSync(join(tmpdir(), "caloric-main-")), "connection.json");
   writeFileSync(file, JSON.stringify(info));
   const exits: number[] = [];

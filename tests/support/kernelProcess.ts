@@ -3,32 +3,14 @@
  * connects a KernelClient. npm test builds dist/ first.
  */
 import { spawn, type ChildProcess } from "node:child_process";
-import { randomUUID } from "node:crypto";
 import { existsSync, mkdtempSync, writeFileSync } from "node:fs";
-import { createServer } from "node:net";
 import { tmpdir } from "node:os";
 import { join, resolve } from "node:path";
 import { fileURLToPath } from "node:url";
-import { KernelClient, parseConnectionInfo, type ConnectionInfo } from "../../kernel/wire/index.js";
+import { KernelClient, loopbackConnection, type ConnectionInfo } from "../../kernel/wire/index.js";
 
 export const REPO_ROOT = resolve(fileURLToPath(new URL("../..", import.meta.url)));
 export const CLI = join(REPO_ROOT, "dist", "kernel", "cli.js");
-
-export async function freePort(): Promise<number> {
-  return new Promise((ok, fail) => {
-    const s = createServer().once("error", fail).listen(0, "127.0.0.1", () => {
-      const port = (s.address() as { port: number }).port;
-      s.close(() => ok(port));
-    });
-  });
-}
-
-export async function connectionInfo(key = randomUUID()): Promise<ConnectionInfo> {
-  const ports = new Set<number>();
-  while (ports.size < 5) ports.add(await freePort());
-  const [shell_port, iopub_port, stdin_port, control_port, hb_port] = [...ports] as [number, number, number, number, number];
-  return parseConnectionInfo({ transport: "tcp", ip: "127.0.0.1", shell_port, iopub_port, stdin_port, control_port, hb_port, key, signature_scheme: "hmac-sha256", kernel_name: "caloric" });
-}
 
 export interface RunningKernel {
   info: ConnectionInfo;
@@ -42,7 +24,7 @@ export interface RunningKernel {
 
 export async function startKernel(options: { env?: NodeJS.ProcessEnv; args?: string[]; key?: string } = {}): Promise<RunningKernel> {
   if (!existsSync(CLI)) throw new Error(`${CLI} is missing: run npm run build first (npm test does)`);
-  const info = await connectionInfo(options.key);
+  const info = await loopbackConnection(options.key);
   const dir = mkdtempSync(join(tmpdir(), "caloric-kernel-"));
   const file = join(dir, "connection.json");
   writeFileSync(file, JSON.stringify(info));

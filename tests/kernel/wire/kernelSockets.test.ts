@@ -1,15 +1,5 @@
-import { createServer } from "node:net";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import { KernelClient, KernelSockets, parseConnectionInfo, type ConnectionInfo, type WireMessage } from "../../../kernel/wire/index.js";
-
-async function freePort(): Promise<number> {
-  return new Promise((resolve) => {
-    const s = createServer().listen(0, "127.0.0.1", () => {
-      const port = (s.address() as { port: number }).port;
-      s.close(() => resolve(port));
-    });
-  });
-}
+import { freePort, KernelClient, KernelSockets, parseConnectionInfo, type ConnectionInfo, type WireMessage } from "../../../kernel/wire/index.js";
 
 describe("KernelSockets", () => {
   let info: ConnectionInfo;
