@@ -22,10 +22,18 @@ import { requireNumber } from "./checks.js";
 
 const EPS = Number.EPSILON;
 
-function polish(x: number, a2: number, a1: number, a0: number): number {
+/**
+ * polishCubicRoot: up to `maxSteps` Newton steps on x^3 + a2 x^2 + a1 x + a0 from the estimate x, each
+ * kept only if it lowers |p(x)| (near a double or triple root p' -> 0 and a raw step on rounding noise
+ * could throw the root far away). Returns x itself when no step helps. Plain numbers, no units.
+ * Accuracy: a simple root to a few ulps from a start within the root's basin; a multiple root is left
+ * where the residual stops falling (its conditioning limit). Source: Newton's method on the polynomial
+ * (Press et al., Numerical Recipes, 3rd ed., section 9.4, from memory).
+ */
+export function polishCubicRoot(x: number, a2: number, a1: number, a0: number, maxSteps = 4): number {
   let best = x;
   let pBest = ((x + a2) * x + a1) * x + a0;
-  for (let k = 0; k < 4 && pBest !== 0; k++) {
+  for (let k = 0; k < maxSteps && pBest !== 0; k++) {
     const d = (3 * best + 2 * a2) * best + a1;
     if (d === 0) break;
     const next = best - pBest / d;
@@ -52,7 +60,7 @@ function quadraticRoots(b1: number, b0: number, a2: number, a1: number, a0: numb
   const curvature = Math.abs(3 * c + a2);
   const spread = Math.min(curvature > 0 ? Math.sqrt((EPS * size) / curvature) : Infinity, Math.cbrt(EPS * size));
   if (im <= 4 * spread) {
-    const r = polish(c, a2, a1, a0);
+    const r = polishCubicRoot(c, a2, a1, a0);
     out.push(r, r);
   }
 }
@@ -79,8 +87,8 @@ function deflated(r: number, a2: number, a1: number, a0: number, out: number[]):
   }
   quadraticRoots(b1, b0, a2, a1, a0, out);
   if (out.length === 3) {
-    out[1] = polish(out[1]!, a2, a1, a0);
-    out[2] = polish(out[2]!, a2, a1, a0);
+    out[1] = polishCubicRoot(out[1]!, a2, a1, a0);
+    out[2] = polishCubicRoot(out[2]!, a2, a1, a0);
   }
 }
 
@@ -122,11 +130,11 @@ export function cubicRoots(a2: number, a1: number, a0: number): number[] {
     const t1 = m * Math.cos((theta + 2 * Math.PI) / 3) - shift;
     const t2 = m * Math.cos((theta - 2 * Math.PI) / 3) - shift;
     const big = Math.abs(t0) >= Math.abs(t1) ? (Math.abs(t0) >= Math.abs(t2) ? t0 : t2) : Math.abs(t1) >= Math.abs(t2) ? t1 : t2;
-    deflated(polish(big, a2, a1, a0), a2, a1, a0, roots);
+    deflated(polishCubicRoot(big, a2, a1, a0), a2, a1, a0, roots);
     return ascending(roots);
   }
   const A = -Math.sign(R) * Math.cbrt(Math.abs(R) + Math.sqrt(R * R - Q3));
   const B = A !== 0 ? Q / A : 0;
-  deflated(polish(A + B - shift, a2, a1, a0), a2, a1, a0, roots);
+  deflated(polishCubicRoot(A + B - shift, a2, a1, a0), a2, a1, a0, roots);
   return ascending(roots);
 }

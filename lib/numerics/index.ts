@@ -6,7 +6,7 @@
 export { integrate, type IntegrateOptions, type IntegrateResult } from "./integrate.js";
 export { brent, type BrentOptions, type RootResult } from "./brent.js";
 export { newtonSafe, type NewtonSafeOptions } from "./newtonSafe.js";
-export { cubicRoots } from "./cubicRoots.js";
+export { cubicRoots, polishCubicRoot } from "./cubicRoots.js";
 export { derivative, type DerivativeOptions, type DerivativeResult } from "./derivative.js";
 export { kronrod21, KRONROD21_NODES, KRONROD21_WEIGHTS, GAUSS10_WEIGHTS } from "./gaussKronrod.js";
 export {

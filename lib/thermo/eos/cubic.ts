@@ -12,7 +12,7 @@
  * polynomial, roots with Z <= B (V <= b) discarded as unphysical.
  * Units: SI (K, Pa, m^3/mol, J/mol, J/(mol K)). Valid for T > 0, P > 0; accuracy is that of the model.
  */
-import { cubicRoots } from "../../numerics/index.js";
+import { cubicRoots, polishCubicRoot } from "../../numerics/index.js";
 import { R } from "../constants.js";
 import { ThermoError, requirePositive } from "../errors.js";
 import { kelvin, volumeText } from "../format.js";
@@ -128,18 +128,9 @@ export function cubicModel(parameters: CubicParameters, fluid: Fluid, options: {
       const c0 = -(Pm * B * B * (B + 1) + A * B);
       const out: number[] = [];
       for (const z0 of cubicRoots(c2, c1, c0)) {
-        // Newton polish, each step kept only if it lowers |f|: near a double or triple root f' -> 0 and a
-        // raw step on rounding noise could throw the root far away.
-        let z = z0;
-        let f = ((z + c2) * z + c1) * z + c0;
-        for (let k = 0; k < 3 && f !== 0; k++) {
-          const d = (3 * z + 2 * c2) * z + c1;
-          const zn = z - f / d;
-          const fn = ((zn + c2) * zn + c1) * zn + c0;
-          if (!(Math.abs(fn) < Math.abs(f))) break;
-          z = zn;
-          f = fn;
-        }
+        // Newton polish (up to 3 steps), each step kept only if it lowers |f|: near a double or triple
+        // root f' -> 0 and a raw step on rounding noise could throw the root far away.
+        const z = polishCubicRoot(z0, c2, c1, c0, 3);
         if (z > B && Number.isFinite(z)) out.push((z * RT) / P);
       }
       out.sort((p, q) => p - q);

@@ -15,19 +15,7 @@
  * differ only on a set of states of measure zero (exact tangency).
  * Validity: finite coefficients; B >= 0. Returns the number of roots written to out[0..].
  */
-
-function polish(z: number, c2: number, c1: number, c0: number): number {
-  let f = ((z + c2) * z + c1) * z + c0;
-  for (let k = 0; k < 4 && f !== 0; k++) {
-    const d = (3 * z + 2 * c2) * z + c1;
-    const zn = z - f / d;
-    const fn = ((zn + c2) * zn + c1) * zn + c0;
-    if (!(Math.abs(fn) < Math.abs(f))) break;
-    z = zn;
-    f = fn;
-  }
-  return z;
-}
+import { polishCubicRoot as polish } from "../../numerics/index.js";
 
 /** Appends z to out[0..count) if physical and not a repeat of the previous root; returns the new count. */
 function keep(z: number, B: number, out: Float64Array, count: number): number {

@@ -8,6 +8,7 @@
  * Writes out[0..3] = Z, H^R (J/mol), S^R (J/(mol K)), ln phi; returns Z. Valid for T > 0, P > 0
  * (inputs are not checked here: callers check once per array).
  */
+import { polishCubicRoot } from "../../numerics/index.js";
 import { R } from "../constants.js";
 import { PR, prKappa } from "./pr.js";
 
@@ -53,14 +54,8 @@ export function prStateFast(T: number, P: number, Tc: number, Pc: number, omega:
   return Z;
 }
 
-function polish(z: number, c2: number, c1: number, c0: number): number {
-  const f = ((z + c2) * z + c1) * z + c0;
-  const d = (3 * z + 2 * c2) * z + c1;
-  const zn = z - f / d;
-  // Keep the step only if it helps: near a multiple root f' -> 0 and the step is noise.
-  const fn = ((zn + c2) * zn + c1) * zn + c0;
-  return Math.abs(fn) < Math.abs(f) ? zn : z;
-}
+/** One Newton step, kept only if it helps: near a multiple root f' -> 0 and the step is noise. */
+const polish = (z: number, c2: number, c1: number, c0: number): number => polishCubicRoot(z, c2, c1, c0, 1);
 
 function lnphiOf(Z: number, A: number, B: number): number {
   return Z - 1 - Math.log(Z - B) - (A / (2 * S2 * B)) * Math.log((Z + (1 + S2) * B) / (Z + (1 - S2) * B));

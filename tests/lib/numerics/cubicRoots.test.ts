@@ -1,5 +1,5 @@
 import { describe, expect, it } from "vitest";
-import { cubicRoots, NumericsInputError } from "../../../lib/numerics/index.js";
+import { cubicRoots, NumericsInputError, polishCubicRoot } from "../../../lib/numerics/index.js";
 
 // Check values are constructed: the cubic (x - r1)(x - r2)(x - r3) expanded (Vieta's formulas), so the
 // expected roots are r1, r2, r3 themselves. Tolerances follow the conditioning of rounded coefficients:
@@ -65,5 +65,24 @@ describe("cubicRoots", () => {
   it("cubicRoots rejects non-finite coefficients naming the argument", () => {
     expect(() => cubicRoots(1, NaN, 0)).toThrow(NumericsInputError);
     expect(() => cubicRoots(1, NaN, 0)).toThrow(/argument 'a1' must be a finite number; got NaN/);
+  });
+});
+
+describe("polishCubicRoot", () => {
+  it("polishCubicRoot takes a rough estimate of a simple root to within a few ulps", () => {
+    // (x - 1)(x - 2)(x - 3) from Vieta's formulas; 2.9 lies in the basin of the root 3.
+    const [a2, a1, a0] = fromRoots(1, 2, 3);
+    // Newton's error roughly squares each step: 0.1 -> 2e-2 -> 5e-4 -> 5e-7 -> 3e-13 (x - p/p' iterated by hand).
+    expect(Math.abs(polishCubicRoot(2.9, a2, a1, a0) - 3)).toBeLessThan(1e-11);
+    expect(Math.abs(polishCubicRoot(2.999, a2, a1, a0) - 3)).toBeLessThan(4 * Number.EPSILON * 3);
+  });
+  it("polishCubicRoot stops after maxSteps and keeps no step that raises |p|", () => {
+    const [a2, a1, a0] = fromRoots(1, 2, 3);
+    const one = polishCubicRoot(2.9, a2, a1, a0, 1);
+    // One Newton step from 2.9: x - p(x)/p'(x) with p(2.9) = 1.9*0.9*(-0.1) = -0.171, p'(2.9) = 0.9*(-0.1) + 1.9*(-0.1) + 1.9*0.9 = 1.43 (hand calculation).
+    expect(Math.abs(one - (2.9 + 0.171 / 1.43))).toBeLessThan(1e-12);
+    expect(polishCubicRoot(2.9, a2, a1, a0, 0)).toBe(2.9);
+    // x^3 at its triple root 0: p = p' = 0, so no step is taken and the root comes back untouched.
+    expect(polishCubicRoot(0, 0, 0, 0)).toBe(0);
   });
 });
