@@ -5,6 +5,7 @@
  * Table 39 (region 5). Results are SI: K, Pa, m^3/kg, kg/m^3, J/kg, J/(kg K), m/s.
  */
 import { R_KJ } from "./constants.js";
+import type { SeriesDerivatives } from "./series.js";
 
 export type WaterPhase = "liquid" | "vapor" | "supercritical" | "two-phase";
 
@@ -51,6 +52,22 @@ export interface HelmholtzDerivatives {
   ft: number;
   ftt: number;
   fdt: number;
+}
+
+/**
+ * The vapour regions' (2 and 5) gamma = ln(pi) + gamma_o(tau) + gamma_r(pi, tau), as the derivatives
+ * fromGibbs takes: the ideal part's pi-dependence is ln(pi) alone (IF97 Eqs. 15-17 and 32-34; Tables 12
+ * and 39). `ideal` is gamma_o's series in tau, `residual` gamma_r's with x = pi.
+ */
+export function idealPlusResidual(pi: number, ideal: { f: number; fy: number; fyy: number }, residual: SeriesDerivatives): GibbsDerivatives {
+  return {
+    g: Math.log(pi) + ideal.f + residual.f,
+    gp: 1 / pi + residual.fx,
+    gpp: -1 / (pi * pi) + residual.fxx,
+    gt: ideal.fy + residual.fy,
+    gtt: ideal.fyy + residual.fyy,
+    gpt: residual.fxy,
+  };
 }
 
 /** Properties from gamma(pi, tau); T in K, pMPa in MPa. Works for regions 1, 2 and 5 (total derivatives). */

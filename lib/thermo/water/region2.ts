@@ -4,7 +4,7 @@
  * 623.15 K < T <= 863.15 K for 0 < p <= pB23(T); 863.15 K < T <= 1073.15 K for 0 < p <= 100 MPa.
  * Source: IAPWS R7-97(2012) Sec. 6.1; derivative relations Table 12.
  */
-import { fromGibbs, type WaterState } from "./properties.js";
+import { fromGibbs, idealPlusResidual, type WaterState } from "./properties.js";
 import { seriesInY, seriesWithDerivatives } from "./series.js";
 import { REGION2_IDEAL, REGION2_RESIDUAL } from "./tables/region2Coefficients.js";
 
@@ -15,13 +15,6 @@ export function region2(T: number, p: number): WaterState {
   const tau = 540 / T; // reducing temperature T* = 540 K
   const ideal = seriesInY(REGION2_IDEAL, tau);
   const r = seriesWithDerivatives(REGION2_RESIDUAL, pi, tau - 0.5);
-  const props = fromGibbs(T, pMPa, pi, tau, {
-    g: Math.log(pi) + ideal.f + r.f,
-    gp: 1 / pi + r.fx,
-    gpp: -1 / (pi * pi) + r.fxx,
-    gt: ideal.fy + r.fy,
-    gtt: ideal.fyy + r.fyy,
-    gpt: r.fxy,
-  });
+  const props = fromGibbs(T, pMPa, pi, tau, idealPlusResidual(pi, ideal, r));
   return { ...props, x: Number.NaN, phase: "vapor", region: 2 };
 }

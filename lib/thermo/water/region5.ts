@@ -3,7 +3,7 @@
  * part (Table 38), Eq. (32). Validity: 1073.15 K <= T <= 2273.15 K, 0 < p <= 50 MPa (the 2007 revision
  * extended it from 10 MPa). Source: IAPWS R7-97(2012) Sec. 7; derivative relations Table 39.
  */
-import { fromGibbs, type WaterState } from "./properties.js";
+import { fromGibbs, idealPlusResidual, type WaterState } from "./properties.js";
 import { seriesInY, seriesWithDerivatives } from "./series.js";
 import { REGION5_IDEAL, REGION5_RESIDUAL } from "./tables/region5Coefficients.js";
 
@@ -14,13 +14,6 @@ export function region5(T: number, p: number): WaterState {
   const tau = 1000 / T; // T* = 1000 K
   const ideal = seriesInY(REGION5_IDEAL, tau);
   const r = seriesWithDerivatives(REGION5_RESIDUAL, pi, tau);
-  const props = fromGibbs(T, pMPa, pi, tau, {
-    g: Math.log(pi) + ideal.f + r.f,
-    gp: 1 / pi + r.fx,
-    gpp: -1 / (pi * pi) + r.fxx,
-    gt: ideal.fy + r.fy,
-    gtt: ideal.fyy + r.fyy,
-    gpt: r.fxy,
-  });
+  const props = fromGibbs(T, pMPa, pi, tau, idealPlusResidual(pi, ideal, r));
   return { ...props, x: Number.NaN, phase: "vapor", region: 5 };
 }
