@@ -41,9 +41,8 @@ export function virial(fluid: Fluid, correlation: VirialCorrelation = "abbott"):
 
   const matrix = (T: number) => pairs.map((row) => row.map((c) => pairB(c, correlation, T)));
 
-  const second = (T: number) => {
-    requirePositive("T", T, "K");
-    const m = matrix(T);
+  // Mixing rule B = sum_i sum_j x_i x_j B_ij (exact for the second virial coefficient), and its T-derivative.
+  const mixed = (m: { B: number; dBdT: number }[][]) => {
     let B = 0;
     let dBdT = 0;
     for (let i = 0; i < n; i++) for (let j = 0; j < n; j++) {
@@ -51,6 +50,11 @@ export function virial(fluid: Fluid, correlation: VirialCorrelation = "abbott"):
       dBdT += x[i]! * x[j]! * m[i]![j]!.dBdT;
     }
     return { B, dBdT };
+  };
+
+  const second = (T: number) => {
+    requirePositive("T", T, "K");
+    return mixed(matrix(T));
   };
 
   // Kay's-rule pseudo-critical constants, used only for the validity rule of thumb.
@@ -93,12 +97,7 @@ export function virial(fluid: Fluid, correlation: VirialCorrelation = "abbott"):
     residual(T: number, P: number, _V: number): Residual {
       requirePositive("P", P, "Pa");
       const m = matrix(T);
-      let B = 0;
-      let dBdT = 0;
-      for (let i = 0; i < n; i++) for (let j = 0; j < n; j++) {
-        B += x[i]! * x[j]! * m[i]![j]!.B;
-        dBdT += x[i]! * x[j]! * m[i]![j]!.dBdT;
-      }
+      const { B, dBdT } = mixed(m);
       const RT = R * T;
       const lnphiComponents = comps.map((_, i) => {
         let s = 0;
