@@ -27,52 +27,15 @@
  * In the liquid the volume is always too large (+17 % to +33 % PR, +32 % to +50 % SRK), while HR is
  * within about 4 % (PR) and 7 % (SRK) of IAPWS-95's at 300 K (HR about -17.6 RT, about -2440 kJ/kg).
  */
-import { readFileSync } from "node:fs";
 import { describe, expect, it } from "vitest";
-import { departure, getSubstance, pr, pureFluid, R, srk, type EosModel } from "../../../../lib/thermo/index.js";
+import { departure, getSubstance, pr, pureFluid, srk, type EosModel } from "../../../../lib/thermo/index.js";
+import { checkRegion as checkAgainst, loadReferenceFixture, type ReferenceBound, type ReferenceRow } from "../../../support/residualReference.js";
 
-interface Row {
-  T: number;
-  P: number;
-  rho: number;
-  Z: number;
-  HR_RT: number;
-  SR_R: number;
-  lnphi: number;
-}
-
-interface Fixture {
-  library: string;
-  constants: { Tc_K: number; Pc_MPa: number; M_g_mol: number };
-  vapour: Row[];
-  liquid: Row[];
-  saturated_liquid: Row[];
-  saturated_vapour: Row[];
-}
-
-const water95 = JSON.parse(
-  readFileSync(new URL("../../../fixtures/iapws95/water.json", import.meta.url), "utf8"),
-) as Fixture;
-
-interface Bound {
-  Z: number;
-  HR: number;
-  SR: number;
-  lnphi: number;
-}
+const water95 = loadReferenceFixture("water.json");
 
 /** Checks every row against the model on the requested branch; the message names the state. */
-function checkRegion(model: EosModel, rows: Row[], phase: "liquid" | "vapor", bound: Bound): void {
-  expect(rows.length).toBeGreaterThan(0);
-  for (const row of rows) {
-    const r = departure(model, row.T, row.P, { phase });
-    const where = `${model.id} ${phase} T=${row.T} K P=${(row.P / 1e6).toPrecision(4)} MPa`;
-    expect(Math.abs(r.Z / row.Z - 1), `${where}: Z ${r.Z} vs IAPWS-95 ${row.Z}`).toBeLessThan(bound.Z);
-    expect(Math.abs(r.HR / (R * row.T) - row.HR_RT), `${where}: HR/RT vs ${row.HR_RT}`).toBeLessThan(bound.HR);
-    expect(Math.abs(r.SR / R - row.SR_R), `${where}: SR/R vs ${row.SR_R}`).toBeLessThan(bound.SR);
-    expect(Math.abs(r.lnphi - row.lnphi), `${where}: ln phi vs ${row.lnphi}`).toBeLessThan(bound.lnphi);
-  }
-}
+const checkRegion = (model: EosModel, rows: ReferenceRow[], phase: "liquid" | "vapor", bound: ReferenceBound): void =>
+  checkAgainst(model, rows, phase, bound, "IAPWS-95");
 
 const water = getSubstance("water");
 const models = { pr: pr(pureFluid(water)), srk: srk(pureFluid(water)) };
