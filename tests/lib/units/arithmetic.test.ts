@@ -1,15 +1,7 @@
 import { describe, expect, it } from "vitest";
+import { mathWithUnits } from "../../support/mathWithUnits.js";
 import { containsOffset } from "../../../lib/units/arithmetic.js";
-import type { MathJsInstance, Matrix, Unit } from "mathjs";
-import { loadMathjs } from "../../../lib/language/mathjs.js";
-import { installUnits } from "../../../lib/units/index.js";
-
-function mathWithUnits(): MathJsInstance {
-  const m = loadMathjs();
-  const math = m.create(m.all, {}) as unknown as MathJsInstance;
-  installUnits(math);
-  return math;
-}
+import type { Matrix, Unit } from "mathjs";
 
 describe("installOffsetPolicy (via installUnits)", () => {
   const math = mathWithUnits();

@@ -1,15 +1,6 @@
 import { describe, expect, it } from "vitest";
+import { mathWithUnits } from "../../support/mathWithUnits.js";
 import { ADDED_UNITS, ATM_PA, PSI_PA, R_GAS } from "../../../lib/units/catalog.js";
-import type { MathJsInstance } from "mathjs";
-import { loadMathjs } from "../../../lib/language/mathjs.js";
-import { installUnits } from "../../../lib/units/index.js";
-
-function mathWithUnits(): MathJsInstance {
-  const m = loadMathjs();
-  const math = m.create(m.all, {}) as unknown as MathJsInstance;
-  installUnits(math);
-  return math;
-}
 
 describe("ADDED_UNITS", () => {
   it("ADDED_UNITS: every entry has help text and a source", () => {

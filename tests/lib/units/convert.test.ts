@@ -1,16 +1,7 @@
 import { describe, expect, it } from "vitest";
+import { mathWithUnits } from "../../support/mathWithUnits.js";
 import type { Unit } from "mathjs";
 import { describeValue, fromSI, fromSIArray, scalarSI, toSI } from "../../../lib/units/convert.js";
-import type { MathJsInstance } from "mathjs";
-import { loadMathjs } from "../../../lib/language/mathjs.js";
-import { installUnits } from "../../../lib/units/index.js";
-
-function mathWithUnits(): MathJsInstance {
-  const m = loadMathjs();
-  const math = m.create(m.all, {}) as unknown as MathJsInstance;
-  installUnits(math);
-  return math;
-}
 
 describe("toSI", () => {
   const math = mathWithUnits();

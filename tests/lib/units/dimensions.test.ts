@@ -1,15 +1,6 @@
 import { describe, expect, it } from "vitest";
+import { mathWithUnits } from "../../support/mathWithUnits.js";
 import { DIMENSIONS, dimensionOf, hasDimension, isDimensionName } from "../../../lib/units/dimensions.js";
-import type { MathJsInstance } from "mathjs";
-import { loadMathjs } from "../../../lib/language/mathjs.js";
-import { installUnits } from "../../../lib/units/index.js";
-
-function mathWithUnits(): MathJsInstance {
-  const m = loadMathjs();
-  const math = m.create(m.all, {}) as unknown as MathJsInstance;
-  installUnits(math);
-  return math;
-}
 
 describe("DIMENSIONS", () => {
   it("DIMENSIONS: each SI unit string has the declared exponents", () => {

@@ -1,15 +1,6 @@
 import { describe, expect, it } from "vitest";
+import { mathWithUnits } from "../../support/mathWithUnits.js";
 import { CANDIDATE_SI_FACTORS, DISPLAY_CANDIDATES, chooseUnit, chooseUnitName, formatQuantity } from "../../../lib/units/format.js";
-import type { MathJsInstance } from "mathjs";
-import { loadMathjs } from "../../../lib/language/mathjs.js";
-import { installUnits } from "../../../lib/units/index.js";
-
-function mathWithUnits(): MathJsInstance {
-  const m = loadMathjs();
-  const math = m.create(m.all, {}) as unknown as MathJsInstance;
-  installUnits(math);
-  return math;
-}
 
 describe("formatQuantity", () => {
   const math = mathWithUnits();

@@ -1,14 +1,6 @@
 import { describe, expect, it } from "vitest";
-import type { MathJsInstance } from "mathjs";
+import { mathWithUnits } from "../../support/mathWithUnits.js";
 import { loadMathjs } from "../../../lib/language/mathjs.js";
-import { installUnits } from "../../../lib/units/index.js";
-
-function mathWithUnits(): MathJsInstance {
-  const m = loadMathjs();
-  const math = m.create(m.all, {}) as unknown as MathJsInstance;
-  installUnits(math);
-  return math;
-}
 
 describe("installUnits", () => {
   it("installUnits adds units and keeps ordinary mathjs working", () => {

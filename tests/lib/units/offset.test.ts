@@ -1,15 +1,7 @@
 import { describe, expect, it } from "vitest";
+import { mathWithUnits } from "../../support/mathWithUnits.js";
 import { absoluteOf, checkPower, isOffsetQuantity, productOperands, sumOperands } from "../../../lib/units/offset.js";
-import type { MathJsInstance, Unit } from "mathjs";
-import { loadMathjs } from "../../../lib/language/mathjs.js";
-import { installUnits } from "../../../lib/units/index.js";
-
-function mathWithUnits(): MathJsInstance {
-  const m = loadMathjs();
-  const math = m.create(m.all, {}) as unknown as MathJsInstance;
-  installUnits(math);
-  return math;
-}
+import type { Unit } from "mathjs";
 
 describe("offset policy", () => {
   const math = mathWithUnits();

@@ -6,15 +6,9 @@
  */
 import type { MathJsInstance, Unit } from "mathjs";
 import { describe, expect, it } from "vitest";
+import { mathWithUnits } from "../../support/mathWithUnits.js";
 import { loadMathjs } from "../../../lib/language/mathjs.js";
-import { installOffsetConversion, installUnits } from "../../../lib/units/index.js";
-
-function mathWithUnits(): MathJsInstance {
-  const m = loadMathjs();
-  const math = m.create(m.all, {}) as unknown as MathJsInstance;
-  installUnits(math);
-  return math;
-}
+import { installOffsetConversion } from "../../../lib/units/index.js";
 
 const T_K = 400.90785014980906; // python3: 100e5 * 1 / (8.314462618 * 3000)
 const IDEAL_T = "100 bar * 1 m^3 / (8.314462618 J/(mol K) * 3 kmol)";

@@ -1,14 +1,7 @@
 import { describe, expect, it } from "vitest";
-import type { MathJsInstance, Unit } from "mathjs";
-import { loadMathjs } from "../../../lib/language/mathjs.js";
-import { installUnits, installParseCache, PARSE_CACHE_LIMIT } from "../../../lib/units/index.js";
-
-function mathWithUnits(): MathJsInstance {
-  const m = loadMathjs();
-  const math = m.create(m.all, {}) as unknown as MathJsInstance;
-  installUnits(math);
-  return math;
-}
+import { mathWithUnits } from "../../support/mathWithUnits.js";
+import type { Unit } from "mathjs";
+import { installParseCache, PARSE_CACHE_LIMIT } from "../../../lib/units/index.js";
 
 type UnitClass = { parse(s: string, o?: unknown): Unit };
 

@@ -5,17 +5,9 @@
  * Numeric references marked "scipy.constants" were computed with Debian's python3-scipy
  * (scipy.constants: psi, atm, bar, Btu, calorie_th, pound, foot, R, g), i.e. NIST/CODATA values.
  */
-import type { MathJsInstance, Unit } from "mathjs";
+import type { Unit } from "mathjs";
 import { describe, expect, it } from "vitest";
-import { loadMathjs } from "../../../lib/language/mathjs.js";
-import { installUnits } from "../../../lib/units/index.js";
-
-function mathWithUnits(): MathJsInstance {
-  const m = loadMathjs();
-  const math = m.create(m.all, {}) as unknown as MathJsInstance;
-  installUnits(math);
-  return math;
-}
+import { mathWithUnits } from "../../support/mathWithUnits.js";
 
 type Row =
   | { expr: string; unit: string; value: number; rtol?: number; source: string }
