@@ -23,7 +23,8 @@ function lcg(seed: number): () => number {
   return () => ((s = (Math.imul(s, 1664525) + 1013904223) >>> 0) / 4294967296);
 }
 
-function nodeRate(n: number): { rate: number; check: number } {
+/** n pseudo-random states, 200-400 K and 0.1-10 MPa, the same sequence every run (seed 1). */
+function randomStates(n: number): { T: Float64Array; P: Float64Array } {
   const rnd = lcg(1);
   const T = new Float64Array(n);
   const P = new Float64Array(n);
@@ -31,6 +32,11 @@ function nodeRate(n: number): { rate: number; check: number } {
     T[i] = 200 + 200 * rnd();
     P[i] = 1e5 + (1e7 - 1e5) * rnd();
   }
+  return { T, P };
+}
+
+function nodeRate(n: number): { rate: number; check: number } {
+  const { T, P } = randomStates(n);
   const out = new Float64Array(4);
   let best = Infinity;
   let check = 0;
@@ -48,13 +54,7 @@ const benchMethane = () => ({ id: "methane", name: "methane", formula: "CH4", al
 
 function columnRate(n: number): number {
   const m = pr(pureFluid(benchMethane()));
-  const rnd = lcg(1);
-  const T = new Float64Array(n);
-  const P = new Float64Array(n);
-  for (let i = 0; i < n; i++) {
-    T[i] = 200 + 200 * rnd();
-    P[i] = 1e5 + (1e7 - 1e5) * rnd();
-  }
+  const { T, P } = randomStates(n);
   let best = Infinity;
   for (let rep = 0; rep < 5; rep++) {
     const t0 = performance.now();
