@@ -1,4 +1,5 @@
 import { describe, expect, it } from "vitest";
+import { expectCriticalPointsNear } from "../../../support/substanceChecks.js";
 import { R } from "../../../../lib/thermo/constants.js";
 import { cp } from "../../../../lib/thermo/idealGas/cp.js";
 import { ALKANES } from "../../../../lib/thermo/substances/alkanes.js";
@@ -27,10 +28,7 @@ describe("ALKANES", () => {
       ["propane", 369.89, 4.2512e6],
       ["n-butane", 425.125, 3.796e6],
     ];
-    for (const [id, Tc, Pc] of ref) {
-      expect(Math.abs(get(id).Tc / Tc - 1), id).toBeLessThan(0.002);
-      expect(Math.abs(get(id).Pc / Pc - 1), id).toBeLessThan(0.01);
-    }
+    expectCriticalPointsNear(ALKANES, ref);
   });
 
   it("ALKANES ideal-gas Cp agrees with statistical-thermodynamics tables within 2 %", () => {

@@ -1,4 +1,5 @@
 import { describe, expect, it } from "vitest";
+import { expectCriticalPointsNear } from "../../../support/substanceChecks.js";
 import { R } from "../../../../lib/thermo/constants.js";
 import { cp } from "../../../../lib/thermo/idealGas/cp.js";
 import { GASES } from "../../../../lib/thermo/substances/gases.js";
@@ -42,10 +43,7 @@ describe("GASES", () => {
       ["argon", 150.687, 4.863e6],
       ["oxygen", 154.581, 5.043e6],
     ];
-    for (const [id, Tc, Pc] of ref) {
-      expect(Math.abs(get(id).Tc / Tc - 1), id).toBeLessThan(0.002);
-      expect(Math.abs(get(id).Pc / Pc - 1), id).toBeLessThan(0.01);
-    }
+    expectCriticalPointsNear(GASES, ref);
   });
 
   it("GASES air is marked pseudo-pure and CO2's Tb as a sublimation point", () => {
