@@ -38,13 +38,14 @@ export function expandInputs(inputs: string[]): string[] {
   });
 }
 
-const titleOf = (nb: Notebook, fallback: string): string => {
+/** The first markdown heading of the notebook, if any. */
+const headingOf = (nb: Notebook): string | undefined => {
   for (const c of nb.cells) {
     if (c.cell_type !== "markdown") continue;
     const m = /^#\s+(.+)$/m.exec(Array.isArray(c.source) ? c.source.join("") : c.source);
     if (m) return m[1]!.trim();
   }
-  return fallback;
+  return undefined;
 };
 
 export async function runNotebook(input: string, args: RunArgs, log: (s: string) => void, acquire: () => Promise<NotebookKernel> = () => startKernel(args)): Promise<NotebookOutcome> {
@@ -67,7 +68,7 @@ export async function runNotebook(input: string, args: RunArgs, log: (s: string)
     if (args.html) {
       reportPath = join(args.out, `${name}.html`);
       const meta = executed.metadata.caloric as { executed_at: string };
-      writeFileSync(reportPath, renderReport(executed, { title: titleOf(executed, name), source: basename(input), toolVersion: IMPLEMENTATION_VERSION, executedAt: meta.executed_at, checks: run.checks, errors: run.errors }));
+      writeFileSync(reportPath, renderReport(executed, { title: headingOf(executed) ?? name, titleInNotebook: headingOf(executed) !== undefined, source: basename(input), toolVersion: IMPLEMENTATION_VERSION, executedAt: meta.executed_at, checks: run.checks, errors: run.errors }));
     }
     const failed = run.checks.filter((c) => !c.pass);
     const checks = { total: run.checks.length, failed: failed.length };

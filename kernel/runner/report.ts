@@ -10,6 +10,8 @@ import { sourceText, type Notebook, type Output } from "./notebook.js";
 
 export interface ReportInfo {
   title: string;
+  /** The notebook shows its own title (a markdown heading): the header then does not repeat it. */
+  titleInNotebook?: boolean;
   source: string;
   toolVersion: string;
   executedAt: string;
@@ -94,7 +96,7 @@ export function renderReport(nb: Notebook, info: ReportInfo): string {
   return `<!DOCTYPE html>
 <html lang="en"><head><meta charset="utf-8"><meta name="viewport" content="width=device-width, initial-scale=1">
 <title>${escapeHtml(info.title)}</title><style>${STYLE}</style></head>
-<body><header><h1>${escapeHtml(info.title)}</h1>
+<body><header>${info.titleInNotebook ? "" : `<h1>${escapeHtml(info.title)}</h1>`}
 <p>Source: ${escapeHtml(info.source)} · executed ${escapeHtml(info.executedAt)} · Caloric ${escapeHtml(info.toolVersion)}</p></header>
 <div class="caution"><strong>Caution.</strong> ${escapeHtml(CAUTION)}</div>
 ${checksSection(info)}

@@ -52,3 +52,17 @@ describe("renderOutput", () => {
     expect(renderOutput({ output_type: "execute_result", data: { [MIME.text]: "1 < 2" }, metadata: {}, execution_count: 1 })).toBe("<pre>1 &lt; 2</pre>");
   });
 });
+
+describe("renderReport header", () => {
+  const nb: Notebook = { nbformat: 4, nbformat_minor: 5, metadata: {}, cells: [{ cell_type: "markdown", source: "# Case A", metadata: {} }] };
+  const info = { title: "Case A", source: "a.ipynb", toolVersion: "0.1.0", executedAt: "now", checks: [], errors: [] };
+  it("renderReport does not repeat a title the notebook shows itself", () => {
+    const html = renderReport(nb, { ...info, titleInNotebook: true });
+    expect(html.match(/<h1>Case A<\/h1>/g)).toHaveLength(1);
+    expect(html).toContain("<title>Case A</title>");
+  });
+  it("renderReport heads the page with the title when the notebook has none", () => {
+    const html = renderReport({ ...nb, cells: [] }, info);
+    expect(html.match(/<h1>Case A<\/h1>/g)).toHaveLength(1);
+  });
+});
