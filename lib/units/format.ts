@@ -14,7 +14,9 @@ export const DISPLAY_CANDIDATES: Partial<Record<DimensionName, readonly string[]
   pressure: ["Pa", "kPa", "MPa", "GPa"],
   energy: ["J", "kJ", "MJ", "GJ"],
   molar_energy: ["J/mol", "kJ/mol"],
-  specific_energy: ["J/kg", "kJ/kg", "MJ/kg"],
+  // Specific enthalpy, internal energy and heating values read in kJ/kg in steam tables and datasheets
+  // (3051.7 kJ/kg, not 3.0517 MJ/kg), so kJ/kg is the largest automatic choice.
+  specific_energy: ["J/kg", "kJ/kg"],
   molar_volume: ["cm^3/mol", "L/mol", "m^3/mol"],
   volume: ["cm^3", "L", "m^3"],
   power: ["W", "kW", "MW", "GW"],

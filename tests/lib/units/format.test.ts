@@ -45,6 +45,9 @@ describe("chooseUnitName", () => {
     expect(chooseUnitName(-4.2e4, "molar_energy")).toBe("kJ/mol"); // sign ignored: -42 kJ/mol
     expect(chooseUnitName(2.4e-5, "molar_volume")).toBe("cm^3/mol"); // 24 cm^3/mol
     expect(chooseUnitName(1e-9, "pressure")).toBe("Pa"); // below every range: the nearest
+    // Specific enthalpy stays in kJ/kg as steam tables print it: 3051.7 kJ/kg for steam at 10 bar,
+    // 300 degC (IAPWS-IF97; common practice to quote kJ/kg).
+    expect(chooseUnitName(3.0517e6, "specific_energy")).toBe("kJ/kg");
     expect(chooseUnitName(1e13, "pressure")).toBe("GPa"); // above every range: the nearest
     expect(chooseUnitName(0, "energy")).toBe("J");
     expect(chooseUnitName(5, "heat_flux")).toBeUndefined(); // no candidates: caller keeps SI
