@@ -6,17 +6,23 @@
  */
 import type { EngineOutput, RunResult } from "../engine/index.js";
 import type { Json } from "../protocol/index.js";
-import { boolField, stringField } from "./args.js";
+import { RequestError, boolField, stringField } from "./args.js";
 import type { Handler, HandlerContext } from "./context.js";
 
 export const execute_request: Handler = async (ctx) => {
   const c = ctx.request.content;
   const { execution } = ctx.services;
-  const code = stringField(c, "code");
-  const silent = boolField(c, "silent", false);
-  const storeHistory = silent ? false : boolField(c, "store_history", true);
-  const stopOnError = boolField(c, "stop_on_error", true);
-  const expressions = (c.user_expressions ?? {}) as Json;
+  let fields;
+  try {
+    fields = readFields(c);
+  } catch (e) {
+    if (!(e instanceof RequestError)) throw e;
+    // Checked before anything runs: a malformed request executes nothing and gets the full reply shape.
+    const { name: ename, message: evalue } = e;
+    await ctx.reply({ status: "error", execution_count: execution.executionCount, ename, evalue, traceback: [`${ename}: ${evalue}`], user_expressions: {}, payload: [] });
+    return;
+  }
+  const { code, silent, storeHistory, stopOnError, expressions } = fields;
 
   if (execution.abort.shouldAbort(ctx.arrival)) {
     await ctx.reply({ status: "aborted", execution_count: execution.executionCount });
@@ -75,4 +81,16 @@ function expressionResult(r: RunResult): Json {
 function badExpression(key: string): RunResult {
   const evalue = `user_expressions.${key}: expected a string expression`;
   return { ok: false, error: { ename: "RequestError", evalue, traceback: [evalue] } };
+}
+
+function readFields(c: Json) {
+  const code = stringField(c, "code");
+  const silent = boolField(c, "silent", false);
+  const storeHistory = silent ? false : boolField(c, "store_history", true);
+  const stopOnError = boolField(c, "stop_on_error", true);
+  const expressions = c.user_expressions ?? {};
+  if (typeof expressions !== "object" || Array.isArray(expressions)) {
+    throw new RequestError(`user_expressions: expected an object of name: expression strings, got ${JSON.stringify(expressions)}`);
+  }
+  return { code, silent, storeHistory, stopOnError, expressions: expressions as Json };
 }

@@ -98,4 +98,32 @@ describe("execute_request", () => {
     const r = await k.call("shell", "execute_request", { code: 42 });
     expect(r.reply!.content).toMatchObject({ status: "error", evalue: "code: expected a string, got 42" });
   });
+  it("execute_request rejects user_expressions that is not an object before running anything, keeping count and variables", async () => {
+    const k = memoryKernel();
+    await k.call("shell", "execute_request", exec("x = 5"));
+    for (const bad of ["abc", [1], 7]) {
+      const r = await k.call("shell", "execute_request", exec("x = 99", { user_expressions: bad }));
+      expect(r.types).toEqual(["status", "status"]);
+      expect(r.reply!.content).toEqual({
+        status: "error",
+        execution_count: 1,
+        ename: "RequestError",
+        evalue: `user_expressions: expected an object of name: expression strings, got ${JSON.stringify(bad)}`,
+        traceback: [`RequestError: user_expressions: expected an object of name: expression strings, got ${JSON.stringify(bad)}`],
+        user_expressions: {},
+        payload: [],
+      });
+    }
+    const after = await k.call("shell", "execute_request", exec("x"));
+    expect(after.reply!.content.execution_count).toBe(2);
+    expect(after.iopub[2]!.content.data).toEqual({ "text/plain": "5" });
+  });
+
+  it("execute_request field errors (code, silent) reply with the current execution_count and nothing runs", async () => {
+    const k = memoryKernel();
+    const r = await k.call("shell", "execute_request", exec("x = 1", { silent: "yes" }));
+    expect(r.types).toEqual(["status", "status"]);
+    expect(r.reply!.content).toMatchObject({ status: "error", execution_count: 0, evalue: 'silent: expected true or false, got "yes"' });
+    expect(k.services.execution.history.size).toBe(0);
+  });
 });
