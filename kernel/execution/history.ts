@@ -51,9 +51,9 @@ export class History {
     return this.entries.length;
   }
 
-  /** The last n entries (all if n is missing or not positive). */
+  /** The last n entries (all if n is missing; none for n = 0, as a tail of zero lines is empty). */
   tail(n?: number): HistoryEntry[] {
-    return n && n > 0 ? this.entries.slice(-n) : [...this.entries];
+    return lastOf(this.entries, n);
   }
 
   /**
@@ -73,10 +73,16 @@ export class History {
       const seen = new Set<string>();
       hits = hits.reverse().filter((e) => (seen.has(e.input) ? false : (seen.add(e.input), true))).reverse();
     }
-    return n && n > 0 ? hits.slice(-n) : hits;
+    return lastOf(hits, n);
   }
 
   static rows(entries: HistoryEntry[], output: boolean): HistoryRow[] {
     return entries.map((e) => (output ? [e.session, e.line, [e.input, e.output ?? null]] : [e.session, e.line, e.input]));
   }
+}
+
+/** The last n items; all when n is missing. n = 0 gives none (slice(-0) would give all). */
+function lastOf<T>(items: T[], n?: number): T[] {
+  if (n === undefined) return [...items];
+  return n > 0 ? items.slice(-n) : [];
 }

@@ -9,6 +9,7 @@ export const history_request: Handler = async (ctx) => {
   const output = boolField(c, "output", false);
   const type = stringField(c, "hist_access_type", "tail");
   const optionalN = c.n === undefined || c.n === null ? undefined : intField(c, "n");
+  if (optionalN !== undefined && optionalN < 0) throw new RequestError(`n: expected a count of 0 or more, got ${optionalN}`);
   let entries;
   if (type === "tail") entries = history.tail(optionalN ?? 10);
   else if (type === "range") entries = history.range(intField(c, "session", 0), intField(c, "start", 1), c.stop === undefined || c.stop === null ? undefined : intField(c, "stop"));

@@ -8,6 +8,8 @@ describe("History", () => {
   it("History.tail returns the last n entries", () => {
     expect(h.tail(2).map((e) => e.line)).toEqual([4, 5]);
     expect(h.tail().length).toBe(5);
+    expect(h.tail(0)).toEqual([]); // a tail of zero lines is empty (not "everything")
+    expect(h.search("x*", 0)).toEqual([]);
   });
 
   it("History.range selects start <= line < stop in the current session (0 = current)", () => {

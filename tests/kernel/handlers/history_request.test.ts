@@ -16,4 +16,15 @@ describe("history_request", () => {
     const bad = await k.call("shell", "history_request", { hist_access_type: "everything", output: false, raw: true });
     expect(bad.reply!.content).toMatchObject({ status: "error", evalue: 'hist_access_type: expected "tail", "range" or "search", got "everything"' });
   });
+  it("history_request: tail n=0 gives no rows, a negative n is an error reply, range of an earlier (negative) session gives none", async () => {
+    const k = memoryKernel();
+    for (const code of ["a = 1", "a"]) await k.call("shell", "execute_request", { code });
+    const zero = await k.call("shell", "history_request", { hist_access_type: "tail", n: 0, output: false, raw: true });
+    expect(zero.reply!.content).toEqual({ status: "ok", history: [] });
+    const negative = await k.call("shell", "history_request", { hist_access_type: "search", pattern: "*", n: -1, output: false, raw: true });
+    expect(negative.reply!.content).toMatchObject({ status: "error", ename: "RequestError", evalue: "n: expected a count of 0 or more, got -1" });
+    expect(negative.types).toEqual(["status", "status"]);
+    const earlier = await k.call("shell", "history_request", { hist_access_type: "range", session: -1, start: 1, stop: 3, output: false, raw: true });
+    expect(earlier.reply!.content).toEqual({ status: "ok", history: [] });
+  });
 });
