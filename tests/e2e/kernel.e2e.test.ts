@@ -3,6 +3,7 @@
  * The long cell uses only plain mathjs syntax (runs under the placeholder and the final language):
  * summing squares of 3e6 numbers takes well over a second on this machine class.
  */
+import { createHmac } from "node:crypto";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { startKernel, type RunningKernel } from "../support/kernelProcess.js";
 
@@ -89,6 +90,41 @@ describe("kernel over sockets", () => {
     expect(k.stderr()).toMatch(/invalid signature/);
     expect(k.stderr()).toMatch(/unsigned/);
     expect(k.stderr()).toMatch(/replayed/);
+    expect(k.process.exitCode).toBeNull();
+  });
+
+  it("decode over sockets: validly signed but malformed frames (garbage JSON, content not an object, header without msg_type) and missing delimiter or frames are dropped; nothing runs", async () => {
+    await k.client.execute("kept = 41");
+    // Re-sign tampered parts with the connection key, as a client holding the key but sending garbage would.
+    const resign = (frames: Buffer[]) => {
+      const h = createHmac("sha256", k.info.key);
+      for (const part of frames.slice(2, 6)) h.update(part);
+      frames[1] = Buffer.from(h.digest("hex"));
+      return frames;
+    };
+    const cell = (code: string) => k.client.build("execute_request", { code, silent: false, store_history: true, user_expressions: {}, allow_stdin: false, stop_on_error: true });
+    const garbage = cell("kept = 0");
+    garbage.frames[5] = Buffer.from("{not json");
+    const array = cell("kept = 0");
+    array.frames[5] = Buffer.from("[1, 2]");
+    const noType = cell("kept = 0");
+    noType.frames[2] = Buffer.from(JSON.stringify({ msg_id: noType.msgId, session: "s" }));
+    const noDelimiter = cell("kept = 0");
+    const fewFrames = cell("kept = 0");
+    await k.client.sendFrames("shell", resign(garbage.frames));
+    await k.client.sendFrames("shell", resign(array.frames));
+    await k.client.sendFrames("shell", resign(noType.frames));
+    await k.client.sendFrames("shell", noDelimiter.frames.slice(1));
+    await k.client.sendFrames("shell", fewFrames.frames.slice(0, 5));
+    const { iopub } = await k.client.execute("kept + 1");
+    await new Promise((r) => setTimeout(r, 200));
+    for (const m of [garbage, array, noType, noDelimiter, fewFrames]) expect(k.client.childrenOf(m.msgId)).toHaveLength(0);
+    expect(String((iopub.find((m) => m.header.msg_type === "execute_result")!.content.data as Record<string, string>)["text/plain"])).toMatch(/^42\b/);
+    expect(k.stderr()).toMatch(/content is not valid JSON/);
+    expect(k.stderr()).toMatch(/content is not a JSON object/);
+    expect(k.stderr()).toMatch(/header lacks msg_type/);
+    expect(k.stderr()).toMatch(/no <IDS\|MSG> delimiter/);
+    expect(k.stderr()).toMatch(/expected 5 frames after the delimiter/);
     expect(k.process.exitCode).toBeNull();
   });
 
